@@ -1,0 +1,2 @@
+const postcssConfig = { plugins: { tailwindcss: {}, autoprefixer: {} } };
+export default postcssConfig;
