@@ -1,0 +1,115 @@
+import type { MomentCapacity, ResolvedSection } from "../types";
+import { findRoot } from "./find-root";
+import {
+  PHI_TENSION, axialInRange, buildScan, evaluate, kernelOf, newRoot, setDirection, solveScan, solveSingle,
+} from "./section-kernel";
+import { snapUnit } from "./section-forces-at";
+import { phiOf } from "./phi-factor";
+
+/** Biaxial capacity plus the neutral-axis angle that produced it. */
+export type BiaxialCapacity = MomentCapacity & {
+  /** neutral-axis angle α, radians in (−π, π]: compression side u = (sin α, cos α) */
+  alpha: number;
+};
+
+const root = newRoot();
+const tensionOut = new Float64Array(4);
+
+function wrapAngle(a: number): number {
+  let x = a % (2 * Math.PI);
+  if (x > Math.PI) x -= 2 * Math.PI;
+  else if (x <= -Math.PI) x += 2 * Math.PI;
+  return x;
+}
+
+/**
+ * Biaxial design moment strength at Pu in the direction of the applied resultant
+ * moment vector, by rotating the neutral axis (column-checks.md §2, §7.4).
+ *
+ * `thetaRad` = atan2(My, Mx): measured from the +Mx axis toward +My (θ = 0 is pure Mx
+ * compressing the +y face; θ = π/2 pure My compressing the +x face). For each trial
+ * neutral-axis angle α (compression side u = (sin α, cos α)) the depth c is solved for
+ * φPn(c) = Pu; α is iterated (secant, then Brent once bracketed, |Δθ| ≤ 1e-10 rad)
+ * until the nominal moment vector (Mnx, Mny) points along θ. At the final α every
+ * root in c is examined and the smallest capacity governs (§7.6). The capacity is the
+ * magnitude φ √(Mnx² + Mny²).
+ *
+ * For a symmetric section θ = 0 and θ = π/2 give exactly phiMnAt about x and about y.
+ * Circles: see circleCapacityAt for the project's orientation rule (§7.5).
+ *
+ * @param section from resolveSection
+ * @param Pu factored axial load, kip (compression +)
+ * @param thetaRad direction of the moment vector, radians (finite)
+ * @returns capacity with `alpha`, or null when Pu > φPn,max or Pu < −0.9 Pnt
+ * @throws RangeError for non-finite Pu or theta
+ * @example phiMnAtAngle(section, 300, Math.atan2(My, Mx))?.phiMn
+ */
+export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: number): BiaxialCapacity | null {
+  if (typeof thetaRad !== "number" || !Number.isFinite(thetaRad)) {
+    throw new RangeError(`thetaRad must be finite (got ${String(thetaRad)})`);
+  }
+  const k = kernelOf(section);
+  if (!axialInRange(k, Pu)) return null;
+  const theta = wrapAngle(thetaRad);
+  const dir = k.scratchDir;
+  if (Pu <= -PHI_TENSION * k.Pnt) {
+    setDirection(k, snapUnit(Math.sin(theta)), snapUnit(Math.cos(theta)), dir);
+    evaluate(k, dir, 0, tensionOut);
+    const Mn = Math.hypot(tensionOut[1] as number, tensionOut[2] as number);
+    return { phiMn: PHI_TENSION * Mn, Mn, phi: PHI_TENSION, c: 0, epsT: tensionOut[3] as number, alpha: theta };
+  }
+  const mScale = 1e-12 * k.P0 * Math.max(k.section.b, k.section.h);
+  let guess = 0;
+  let degenerate = false;
+  const errAt = (alpha: number): number => {
+    setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
+    solveSingle(k, dir, Pu, guess, root);
+    guess = root.c;
+    if (Math.hypot(root.Mx, root.My) <= mScale) {
+      degenerate = true;
+      return 0;
+    }
+    return wrapAngle(Math.atan2(root.My, root.Mx) - theta);
+  };
+  const tol = 1e-10;
+  let a = theta;
+  let fa = errAt(a);
+  let alpha = a;
+  if (Math.abs(fa) > tol && !degenerate) {
+    let b = wrapStep(a, -fa);
+    let fb = errAt(b);
+    let found = Math.abs(fb) <= tol;
+    alpha = b;
+    for (let iter = 0; iter < 40 && !found && !degenerate; iter++) {
+      if (fa < 0 !== fb < 0 && Math.abs(b - a) < Math.PI) {
+        // bracketed: Brent on α (err is continuous away from the ±π wrap)
+        const lo = a;
+        const flo = fa;
+        alpha = findRoot(errAt, lo, b, flo, fb, 1e-13, tol);
+        found = true;
+        break;
+      }
+      let next = b - (fb * (b - a)) / (fb - fa);
+      if (!Number.isFinite(next) || Math.abs(next - b) > Math.PI / 4) next = b - Math.sign(fb) * Math.min(Math.abs(fb), Math.PI / 4);
+      a = b;
+      fa = fb;
+      b = next;
+      fb = errAt(b);
+      alpha = b;
+      if (Math.abs(fb) <= tol) found = true;
+    }
+  }
+  // final α: every root in c, the smallest capacity along θ governs
+  setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
+  const scan = buildScan(k, dir);
+  solveScan(k, scan, Pu, Math.cos(theta), Math.sin(theta), root);
+  if (Number.isNaN(root.c)) solveSingle(k, dir, Pu, 0, root);
+  const Mn = Math.hypot(root.Mx, root.My);
+  const phi = phiOf(root.epsT, k.epsTy, k.phiC);
+  return { phiMn: phi * Mn, Mn, phi, c: root.c, epsT: root.epsT, alpha: wrapAngle(alpha) };
+}
+
+function wrapStep(a: number, step: number): number {
+  const s = Math.max(-Math.PI / 4, Math.min(Math.PI / 4, step));
+  return a + s;
+}

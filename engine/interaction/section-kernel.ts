@@ -1,0 +1,512 @@
+/**
+ * Strain-compatibility kernel shared by every interaction routine (internal).
+ *
+ * Model (ACI 318-19): plane sections; εcu = 0.003 at the extreme compression fibre
+ * (22.2.2.1); Whitney block 0.85 f'c over a = β1 c, a ≤ the section depth in that
+ * direction (22.2.2.4.1); bars elastic–perfectly plastic with Es = 29 000 ksi (20.2.2);
+ * a bar whose centre lies inside the block (depth d < a) carries fs − 0.85 f'c
+ * (displaced concrete). Compression and compressive strain are positive in forces.
+ *
+ * Direction convention: the neutral-axis angle α gives the unit vector pointing to the
+ * compression side, u = (sin α, cos α). α = 0 compresses the +y face (moment about x,
+ * Mx > 0); α = π/2 compresses the +x face (My > 0). Moments are about the centroidal
+ * axes: Mx = Σ F·y, My = Σ F·x.
+ *
+ * Per-section typed arrays and per-direction scans live in a WeakMap keyed by the
+ * ResolvedSection object, which is therefore treated as immutable once used.
+ */
+import { EPS_CU } from "../materials";
+import { rotateSection } from "../section/rotate-section";
+import { segmentInto } from "../section/measure-circular-segment";
+import { clipRectangleBlock } from "../section/clip-rectangle-block";
+import type { ResolvedSection } from "../types";
+import { phiOf } from "./phi-factor";
+
+/** φ for tension-controlled sections and pure tension (Table 21.2.2). */
+export const PHI_TENSION = 0.9;
+
+/** One neutral-axis direction with bar depths precomputed. */
+export interface Direction {
+  ux: number;
+  uy: number;
+  /** coordinate of the extreme compression fibre along u, in */
+  tmax: number;
+  /** section depth in this direction, in */
+  depth: number;
+  /** depth of each bar below the extreme compression fibre, in */
+  d: Float64Array;
+  /** depth of the extreme tension bar, in */
+  dt: number;
+  /** c at which the block first covers the whole depth */
+  cFull: number;
+  /** smallest c at which Pn = P0 (block full and every bar yielded in compression) */
+  cP0: number;
+}
+
+/**
+ * Values of φPn at grid neutral-axis depths for one direction; grid points at the
+ * displaced-concrete steps carry separate left/right values so each interval
+ * (cR[k], cL[k+1]) is continuous.
+ */
+export interface Scan {
+  dir: Direction;
+  m: number;
+  cL: Float64Array;
+  cR: Float64Array;
+  vL: Float64Array;
+  vR: Float64Array;
+}
+
+export interface Kernel {
+  section: ResolvedSection;
+  n: number;
+  bx: Float64Array;
+  by: Float64Array;
+  ba: Float64Array;
+  circle: boolean;
+  halfB: number;
+  halfH: number;
+  R: number;
+  beta1: number;
+  fy: number;
+  es: number;
+  /** 0.85 f'c, ksi */
+  k85: number;
+  epsTy: number;
+  /** φ for compression-controlled sections: 0.65 tied / 0.75 spiral */
+  phiC: number;
+  P0: number;
+  phiPnMax: number;
+  Pnt: number;
+  /** mirror y → −y maps the bars onto themselves (both senses of Mx are equal) */
+  symAboutX: boolean;
+  /** mirror x → −x maps the bars onto themselves (both senses of My are equal) */
+  symAboutY: boolean;
+  /** uniaxial directions 0: α = 0 (+Mx), 1: α = π/2 (+My), 2: α = π (−Mx), 3: α = 3π/2 (−My) */
+  uni: (Direction | undefined)[];
+  scans: (Scan | undefined)[];
+  halfPitch?: ResolvedSection;
+  /** reusable direction for arbitrary angles */
+  scratchDir: Direction;
+}
+
+const cache = new WeakMap<ResolvedSection, Kernel>();
+
+function isMirrored(bx: Float64Array, by: Float64Array, ba: Float64Array, sx: number, sy: number): boolean {
+  const n = bx.length;
+  const tol = 1e-6;
+  for (let i = 0; i < n; i++) {
+    const x = sx * (bx[i] as number);
+    const y = sy * (by[i] as number);
+    let found = false;
+    for (let j = 0; j < n; j++) {
+      if (
+        Math.abs((bx[j] as number) - x) < tol &&
+        Math.abs((by[j] as number) - y) < tol &&
+        Math.abs((ba[j] as number) - (ba[i] as number)) < 1e-12
+      ) {
+        found = true;
+        break;
+      }
+    }
+    if (!found) return false;
+  }
+  return true;
+}
+
+/** Kernel of a resolved section (built once, cached). */
+export function kernelOf(section: ResolvedSection): Kernel {
+  const hit = cache.get(section);
+  if (hit !== undefined) return hit;
+  if (section === null || typeof section !== "object" || !Array.isArray(section.bars)) {
+    throw new TypeError("section must be a ResolvedSection (use resolveSection)");
+  }
+  const n = section.bars.length;
+  if (n < 1) throw new RangeError("section has no bars");
+  const bx = new Float64Array(n);
+  const by = new Float64Array(n);
+  const ba = new Float64Array(n);
+  section.bars.forEach((bar, i) => {
+    bx[i] = bar.x;
+    by[i] = bar.y;
+    ba[i] = bar.area;
+  });
+  const k: Kernel = {
+    section,
+    n,
+    bx,
+    by,
+    ba,
+    circle: section.shape === "circle",
+    halfB: section.b / 2,
+    halfH: section.h / 2,
+    R: section.shape === "circle" ? section.D / 2 : 0,
+    beta1: section.beta1,
+    fy: section.fy,
+    es: section.Es,
+    k85: 0.85 * section.fc,
+    epsTy: section.fy / section.Es,
+    phiC: section.confinement === "spiral" ? 0.75 : 0.65,
+    P0: section.P0,
+    phiPnMax: section.phiPnMax,
+    Pnt: section.Pnt,
+    symAboutX: isMirrored(bx, by, ba, 1, -1),
+    symAboutY: isMirrored(bx, by, ba, -1, 1),
+    uni: [undefined, undefined, undefined, undefined],
+    scans: [undefined, undefined, undefined, undefined],
+    scratchDir: {
+      ux: 0, uy: 1, tmax: 0, depth: 0, d: new Float64Array(n), dt: 0, cFull: 0, cP0: 0,
+    },
+  };
+  cache.set(section, k);
+  return k;
+}
+
+/** The section turned by half the bar pitch π/n (cached), for circles (§7.5). */
+export function halfPitchOf(k: Kernel): ResolvedSection {
+  if (k.halfPitch === undefined) k.halfPitch = rotateSection(k.section, Math.PI / k.n);
+  return k.halfPitch;
+}
+
+/** Fill `dir` for the unit vector (ux, uy). */
+export function setDirection(k: Kernel, ux: number, uy: number, dir: Direction): Direction {
+  const tmax = k.circle ? k.R : k.halfB * Math.abs(ux) + k.halfH * Math.abs(uy);
+  const depth = 2 * tmax;
+  let dt = 0;
+  for (let i = 0; i < k.n; i++) {
+    const d = tmax - ((k.bx[i] as number) * ux + (k.by[i] as number) * uy);
+    dir.d[i] = d;
+    if (d > dt) dt = d;
+  }
+  dir.ux = ux;
+  dir.uy = uy;
+  dir.tmax = tmax;
+  dir.depth = depth;
+  dir.dt = dt;
+  dir.cFull = depth / k.beta1;
+  // every bar yields in compression once 0.003 (c − d)/c ≥ εty, i.e. c ≥ 0.003 d / (0.003 − εty)
+  const cYield = (EPS_CU * dt) / (EPS_CU - k.epsTy);
+  dir.cP0 = Math.max(dir.cFull, cYield) * (1 + 1e-12);
+  return dir;
+}
+
+/** Unit vector for a uniaxial direction index, exact (no sin/cos round-off). */
+const UNI_UX = [0, 1, 0, -1] as const;
+const UNI_UY = [1, 0, -1, 0] as const;
+
+export function uniDirection(k: Kernel, idx: 0 | 1 | 2 | 3): Direction {
+  let dir = k.uni[idx];
+  if (dir === undefined) {
+    dir = setDirection(k, UNI_UX[idx], UNI_UY[idx], {
+      ux: 0, uy: 0, tmax: 0, depth: 0, d: new Float64Array(k.n), dt: 0, cFull: 0, cP0: 0,
+    });
+    k.uni[idx] = dir;
+  }
+  return dir;
+}
+
+const blockOut = new Float64Array(3);
+
+/**
+ * Forces at neutral-axis depth c (in) for direction `dir`: out = [Pn, Mx, My, εt].
+ * c = 0 is pure tension (every bar at −fy, εt reported as εty + 0.003); c = ∞ is
+ * uniform compression strain εcu.
+ */
+export function evaluate(k: Kernel, dir: Direction, c: number, out: Float64Array): void {
+  const n = k.n;
+  const bx = k.bx;
+  const by = k.by;
+  const ba = k.ba;
+  const fy = k.fy;
+  if (!(c > 0)) {
+    let P = 0;
+    let mx = 0;
+    let my = 0;
+    for (let i = 0; i < n; i++) {
+      const F = -fy * (ba[i] as number);
+      P += F;
+      mx += F * (by[i] as number);
+      my += F * (bx[i] as number);
+    }
+    out[0] = P;
+    out[1] = mx;
+    out[2] = my;
+    out[3] = k.epsTy + EPS_CU;
+    return;
+  }
+  const depth = dir.depth;
+  let a = k.beta1 * c;
+  if (a > depth) a = depth;
+  let area: number;
+  let xc: number;
+  let yc: number;
+  if (k.circle) {
+    if (a >= depth) {
+      area = Math.PI * k.R * k.R;
+      xc = 0;
+      yc = 0;
+    } else {
+      segmentInto(k.R, a, blockOut);
+      area = blockOut[0] as number;
+      const dist = blockOut[1] as number;
+      xc = dir.ux * dist;
+      yc = dir.uy * dist;
+    }
+  } else if (dir.ux === 0 || dir.uy === 0) {
+    area = (dir.ux === 0 ? 2 * k.halfB : 2 * k.halfH) * a;
+    const t = dir.tmax - a / 2;
+    xc = dir.ux * t;
+    yc = dir.uy * t;
+  } else {
+    clipRectangleBlock(k.halfB, k.halfH, dir.ux, dir.uy, dir.tmax - a, blockOut);
+    area = blockOut[0] as number;
+    xc = blockOut[1] as number;
+    yc = blockOut[2] as number;
+  }
+  const k85 = k.k85;
+  const Cc = k85 * area;
+  let P = Cc;
+  let mx = Cc * yc;
+  let my = Cc * xc;
+  const es = k.es;
+  const inv = 1 / c;
+  const d = dir.d;
+  for (let i = 0; i < n; i++) {
+    const di = d[i] as number;
+    let fs = es * EPS_CU * (1 - di * inv);
+    if (fs > fy) fs = fy;
+    else if (fs < -fy) fs = -fy;
+    if (di < a) fs -= k85;
+    const F = fs * (ba[i] as number);
+    P += F;
+    mx += F * (by[i] as number);
+    my += F * (bx[i] as number);
+  }
+  out[0] = P;
+  out[1] = mx;
+  out[2] = my;
+  out[3] = EPS_CU * (dir.dt * inv - 1);
+}
+
+const evalOut = new Float64Array(4);
+
+/** φ·Pn at c (kip). */
+export function phiPnAt(k: Kernel, dir: Direction, c: number): number {
+  evaluate(k, dir, c, evalOut);
+  return phiOf(evalOut[3] as number, k.epsTy, k.phiC) * (evalOut[0] as number);
+}
+
+/** Number of uniform grid intervals over 0 < c ≤ cFull in a scan. */
+const SCAN_INTERVALS = 24;
+
+/** Build the φPn scan of a direction (see {@link Scan}). */
+export function buildScan(k: Kernel, dir: Direction): Scan {
+  const pts: { c: number; jump: boolean }[] = [];
+  pts.push({ c: 0, jump: false });
+  for (let i = 1; i <= SCAN_INTERVALS; i++) pts.push({ c: (dir.cFull * i) / SCAN_INTERVALS, jump: false });
+  if (dir.cP0 > dir.cFull) {
+    const r = dir.cP0 / dir.cFull;
+    for (let i = 1; i <= 3; i++) pts.push({ c: dir.cFull * Math.pow(r, i / 3), jump: false });
+  }
+  if (dir.dt > 0) {
+    pts.push({ c: (EPS_CU * dir.dt) / (EPS_CU + k.epsTy), jump: false });
+    pts.push({ c: (EPS_CU * dir.dt) / (2 * EPS_CU + k.epsTy), jump: false });
+  }
+  for (let i = 0; i < k.n; i++) {
+    const di = dir.d[i] as number;
+    if (di > 0 && di < dir.depth) pts.push({ c: di / k.beta1, jump: true });
+  }
+  pts.sort((p, q) => p.c - q.c);
+  // merge coincident points (a jump wins)
+  const merged: { c: number; jump: boolean }[] = [];
+  for (const p of pts) {
+    const last = merged[merged.length - 1];
+    if (last !== undefined && Math.abs(p.c - last.c) <= 1e-9 * dir.cP0) {
+      last.jump = last.jump || p.jump;
+    } else merged.push({ ...p });
+  }
+  const m = merged.length;
+  const cL = new Float64Array(m);
+  const cR = new Float64Array(m);
+  const vL = new Float64Array(m);
+  const vR = new Float64Array(m);
+  merged.forEach((p, i) => {
+    if (p.jump) {
+      cL[i] = p.c * (1 - 1e-10);
+      cR[i] = p.c * (1 + 1e-10);
+    } else {
+      cL[i] = p.c;
+      cR[i] = p.c;
+    }
+    vL[i] = phiPnAt(k, dir, cL[i] as number);
+    vR[i] = p.jump ? phiPnAt(k, dir, cR[i] as number) : (vL[i] as number);
+  });
+  return { dir, m, cL, cR, vL, vR };
+}
+
+export function uniScan(k: Kernel, idx: 0 | 1 | 2 | 3): Scan {
+  let s = k.scans[idx];
+  if (s === undefined) {
+    s = buildScan(k, uniDirection(k, idx));
+    k.scans[idx] = s;
+  }
+  return s;
+}
+
+/**
+ * Root of φPn(c) − Pu on (lo, hi) where the function is continuous and changes sign
+ * (Brent's method: inverse quadratic / secant steps safeguarded by bisection).
+ */
+export function solveC(k: Kernel, dir: Direction, Pu: number, lo: number, flo: number, hi: number, fhi: number): number {
+  let a = lo;
+  let b = hi;
+  let fa = flo;
+  let fb = fhi;
+  if (fa === 0) return a;
+  if (fb === 0) return b;
+  let c = a;
+  let fc = fa;
+  let d = b - a;
+  let e = d;
+  const ftol = 1e-11 * (k.P0 > 0 ? k.P0 : 1);
+  for (let iter = 0; iter < 100; iter++) {
+    if ((fb > 0 && fc > 0) || (fb < 0 && fc < 0)) {
+      c = a;
+      fc = fa;
+      d = b - a;
+      e = d;
+    }
+    if (Math.abs(fc) < Math.abs(fb)) {
+      a = b;
+      b = c;
+      c = a;
+      fa = fb;
+      fb = fc;
+      fc = fa;
+    }
+    const tol = 2e-15 * Math.abs(b) + 1e-13 * dir.cP0;
+    const xm = 0.5 * (c - b);
+    if (Math.abs(xm) <= tol || Math.abs(fb) <= ftol) return b;
+    if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
+      const s = fb / fa;
+      let p: number;
+      let q: number;
+      if (a === c) {
+        p = 2 * xm * s;
+        q = 1 - s;
+      } else {
+        const qq = fa / fc;
+        const r = fb / fc;
+        p = s * (2 * xm * qq * (qq - r) - (b - a) * (r - 1));
+        q = (qq - 1) * (r - 1) * (s - 1);
+      }
+      if (p > 0) q = -q;
+      else p = -p;
+      if (2 * p < Math.min(3 * xm * q - Math.abs(tol * q), Math.abs(e * q))) {
+        e = d;
+        d = p / q;
+      } else {
+        d = xm;
+        e = d;
+      }
+    } else {
+      d = xm;
+      e = d;
+    }
+    a = b;
+    fa = fb;
+    b += Math.abs(d) > tol ? d : xm > 0 ? tol : -tol;
+    fb = phiPnAt(k, dir, b) - Pu;
+  }
+  return b;
+}
+
+/** Result of a root search: the governing (smallest-moment) root. */
+export interface RootResult {
+  c: number;
+  Pn: number;
+  Mx: number;
+  My: number;
+  epsT: number;
+  phi: number;
+}
+
+const rootOut = new Float64Array(4);
+
+/**
+ * Every root of φPn(c) = Pu bracketed by the scan; returns the one with the smallest
+ * moment projected on (px, py) in (Mx, My) space (§7.6), or fills `res` with NaN c
+ * when none is found. Assumes −0.9 Pnt < Pu ≤ φPn,max.
+ */
+export function solveScan(k: Kernel, scan: Scan, Pu: number, px: number, py: number, res: RootResult): RootResult {
+  const { m, cL, cR, vL, vR, dir } = scan;
+  let best = Number.POSITIVE_INFINITY;
+  res.c = Number.NaN;
+  for (let i = 0; i + 1 < m; i++) {
+    const f0 = (vR[i] as number) - Pu;
+    const f1 = (vL[i + 1] as number) - Pu;
+    if (f0 < 0 === f1 < 0) continue;
+    const c = solveC(k, dir, Pu, cR[i] as number, f0, cL[i + 1] as number, f1);
+    evaluate(k, dir, c, rootOut);
+    const mProj = (rootOut[1] as number) * px + (rootOut[2] as number) * py;
+    if (mProj < best) {
+      best = mProj;
+      res.c = c;
+      res.Pn = rootOut[0] as number;
+      res.Mx = rootOut[1] as number;
+      res.My = rootOut[2] as number;
+      res.epsT = rootOut[3] as number;
+      res.phi = phiOf(res.epsT, k.epsTy, k.phiC);
+    }
+  }
+  return res;
+}
+
+/**
+ * One root of φPn(c) = Pu on [0, cP0] by Brent from the whole bracket, optionally
+ * starting from a guess (used inside the biaxial angle iteration, where speed matters
+ * more than catching every root; the final angle is re-solved with a full scan).
+ */
+export function solveSingle(k: Kernel, dir: Direction, Pu: number, guess: number, res: RootResult): RootResult {
+  let lo = 0;
+  let hi = dir.cP0;
+  let flo = -PHI_TENSION * k.Pnt - Pu;
+  let fhi = k.phiC * k.P0 - Pu;
+  if (guess > 0 && guess < hi) {
+    const g1 = guess * 0.97;
+    const g2 = Math.min(guess * 1.03, hi);
+    const f1 = phiPnAt(k, dir, g1) - Pu;
+    const f2 = phiPnAt(k, dir, g2) - Pu;
+    if (f1 < 0 && f2 >= 0) {
+      lo = g1;
+      flo = f1;
+      hi = g2;
+      fhi = f2;
+    } else if (f1 < 0) {
+      lo = g1;
+      flo = f1;
+    } else {
+      hi = g1;
+      fhi = f1;
+    }
+  }
+  const c = solveC(k, dir, Pu, lo, flo, hi, fhi);
+  evaluate(k, dir, c, rootOut);
+  res.c = c;
+  res.Pn = rootOut[0] as number;
+  res.Mx = rootOut[1] as number;
+  res.My = rootOut[2] as number;
+  res.epsT = rootOut[3] as number;
+  res.phi = phiOf(res.epsT, k.epsTy, k.phiC);
+  return res;
+}
+
+export function newRoot(): RootResult {
+  return { c: Number.NaN, Pn: 0, Mx: 0, My: 0, epsT: 0, phi: 0 };
+}
+
+/** Validate a factored axial load and say whether it is within −0.9 Pnt … φPn,max. */
+export function axialInRange(k: Kernel, Pu: number): boolean {
+  if (typeof Pu !== "number" || !Number.isFinite(Pu)) throw new RangeError(`Pu must be a finite number (got ${String(Pu)})`);
+  return Pu <= k.phiPnMax && Pu >= -PHI_TENSION * k.Pnt;
+}
