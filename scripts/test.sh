@@ -4,7 +4,10 @@
 # the built app. Ends with one line "N passed, N failed" and exits non-zero on any failure.
 source "$(dirname "$0")/services.sh"
 set +e
-export CLUSTER_NAME=pg-test PG_PORT="${TEST_PG_PORT:-54339}" PG_DB=caryatid_test PG_FSYNC=off
+# Every port, the cluster and the build folder can be moved (TEST_*), so two developers' runs on one
+# machine never share a database or a build; TEST_VITEST / TEST_E2E narrow the suites while working.
+export CLUSTER_NAME="${TEST_CLUSTER:-pg-test}" PG_PORT="${TEST_PG_PORT:-54339}" PG_DB=caryatid_test PG_FSYNC=off
+export NEXT_DIST_DIR="${TEST_NEXT_DIST_DIR:-.next}"
 export MAIL_SMTP_PORT="${TEST_MAIL_SMTP_PORT:-2535}" MAIL_HTTP_PORT="${TEST_MAIL_HTTP_PORT:-2590}"
 export APP_PORT="${TEST_APP_PORT:-3100}"
 export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT" NEXTAUTH_SECRET="caryatid-test-secret"
@@ -12,7 +15,7 @@ export NEXT_TELEMETRY_DISABLED=1 CARYATID_TEST=1 NODE_ENV_LABEL=test
 
 PASSED=0
 FAILED=0
-REPORTS="$ROOT/.data/test-reports"
+REPORTS="$ROOT/.data/test-reports-${TEST_CLUSTER:-pg-test}"
 
 cleanup() { trap - EXIT INT TERM; stop_background; stop_postgres; }
 trap cleanup EXIT
@@ -57,16 +60,16 @@ step "typecheck" npx tsc --noEmit -p tsconfig.json
 step "lint" npx eslint .
 
 log "vitest (unit, reference, integration)"
-npx vitest run --reporter=default --reporter=json --outputFile.json="$REPORTS/vitest.json"
+npx vitest run ${TEST_VITEST:-} --reporter=default --reporter=json --outputFile.json="$REPORTS/vitest.json"
 count_json "$REPORTS/vitest.json" vitest
 
 step "build" npm run --silent build
-if [ -d .next ]; then
+if [ -d "$NEXT_DIST_DIR" ]; then
   if [ -f scripts/worker.ts ]; then start_background worker-test npx tsx scripts/worker.ts; fi
   start_background app-test npx next start -H 127.0.0.1 -p "$APP_PORT"
   if wait_for_port "$APP_PORT" 60; then
     log "playwright (Chromium at /usr/bin/chromium)"
-    PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/playwright.json" npx playwright test --reporter=list,json
+    PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/playwright.json" npx playwright test ${TEST_E2E:-} --reporter=list,json
     count_json "$REPORTS/playwright.json" playwright
   else
     log "app did not start"; FAILED=$((FAILED + 1))
