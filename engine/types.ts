@@ -179,6 +179,8 @@ export interface CheckOptions {
   radius?: "approx" | "gross";
   /** units in which reason texts quote numbers (the numbers in the output are converted at the edge) */
   displayUnits?: "US" | "SI";
+  /** also report Bresler's reciprocal-load φPn beside each governing biaxial check (comparison only) */
+  bresler?: boolean;
 }
 
 export interface Prices {

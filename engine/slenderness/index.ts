@@ -1,0 +1,15 @@
+export { computeRadiusOfGyration } from "./compute-radius-of-gyration";
+export { computeEndMomentRatio } from "./compute-end-moment-ratio";
+export { computeSlendernessLimit } from "./compute-slenderness-limit";
+export { computeEffectiveStiffness, computeColumnInertia } from "./compute-effective-stiffness";
+export type { StiffnessInput } from "./compute-effective-stiffness";
+export { computeCriticalLoad } from "./compute-critical-load";
+export { computeCm } from "./compute-cm";
+export { computeMomentMagnifier } from "./compute-moment-magnifier";
+export { computeMinimumMoment } from "./compute-minimum-moment";
+export { computeSwayMagnifier } from "./compute-sway-magnifier";
+export type { SwayMagnifier } from "./compute-sway-magnifier";
+export { computeSegmentEndMoments } from "./compute-segment-end-moments";
+export type { SegmentEndMoments } from "./compute-segment-end-moments";
+export { runMagnifierChain, createMagnifierChain } from "./run-magnifier-chain";
+export type { AxisConstants, ChainVariant, MagnifierChain } from "./run-magnifier-chain";
