@@ -1,0 +1,49 @@
+import { NextResponse } from "next/server";
+import { handler } from "@/lib/api/handler";
+import { notFound } from "@/lib/api/errors";
+import { authorizeMark } from "@/lib/authz";
+import { readMarkInputs } from "@/db/queries/search-inputs";
+import { insertSearch, listSearchesOfMark, setSearchJobId } from "@/db/queries/searches";
+import { buildSearchRequest, fingerprintMark, startSearchSchema } from "@/lib/search-request";
+import { enqueueSearch } from "@/lib/jobs/search-queue";
+import { recordAudit } from "@/lib/audit";
+import { toSearchView } from "@/lib/search-view";
+
+export const runtime = "nodejs";
+export const dynamic = "force-dynamic";
+
+/** Searches of a mark, newest first. */
+export const GET = handler({}, async ({ user, params }) => {
+  const access = await authorizeMark(user, params.id ?? "", "read");
+  const inputs = await readMarkInputs(access.markId);
+  if (!inputs) throw notFound("column mark not found");
+  const current = fingerprintMark(inputs);
+  const rows = await listSearchesOfMark(access.markId);
+  return { searches: rows.map((row) => toSearchView(row, current)) };
+});
+
+/** Stores the request (space, price book, loads) and queues it for a worker. */
+export const POST = handler({ body: startSearchSchema }, async ({ user, params, body }) => {
+  const access = await authorizeMark(user, params.id ?? "", "runSearch");
+  const inputs = await readMarkInputs(access.markId);
+  if (!inputs) throw notFound("column mark not found");
+  const request = buildSearchRequest(inputs, body);
+  const search = await insertSearch({
+    markId: access.markId,
+    request,
+    inputsHash: fingerprintMark(inputs),
+    priceBookId: inputs.priceBook?.id ?? null,
+    createdBy: access.user.id,
+  });
+  const jobId = await enqueueSearch(search.id);
+  await setSearchJobId(search.id, jobId);
+  await recordAudit({
+    workspaceId: access.workspaceId,
+    userId: access.user.id,
+    action: "search.start",
+    entity: "search",
+    entityId: search.id,
+    after: { markId: access.markId, space: request.space ?? null },
+  });
+  return NextResponse.json({ search: toSearchView({ ...search, jobId }, search.inputsHash) }, { status: 201 });
+});
