@@ -1,7 +1,7 @@
 import type { MomentCapacity, ResolvedSection } from "../types";
 import { findRoot } from "./find-root";
 import {
-  PHI_TENSION, axialInRange, buildScan, evaluate, kernelOf, newRoot, setDirection, solveScan, solveSingle,
+  PHI_TENSION, axialInRange, evaluate, kernelOf, newRoot, setDirection, solveMulti, solveSingle, type Kernel,
 } from "./section-kernel";
 import { snapUnit } from "./section-forces-at";
 import { phiOf } from "./phi-factor";
@@ -51,46 +51,37 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   const k = kernelOf(section);
   if (!axialInRange(k, Pu)) return null;
   const theta = wrapAngle(thetaRad);
-  const dir = k.scratchDir;
   if (Pu <= -PHI_TENSION * k.Pnt) {
+    const dir = k.scratchDir;
     setDirection(k, snapUnit(Math.sin(theta)), snapUnit(Math.cos(theta)), dir);
     evaluate(k, dir, 0, tensionOut);
     const Mn = Math.hypot(tensionOut[1] as number, tensionOut[2] as number);
     return { phiMn: PHI_TENSION * Mn, Mn, phi: PHI_TENSION, c: 0, epsT: tensionOut[3] as number, alpha: theta };
   }
-  const mScale = 1e-12 * k.P0 * Math.max(k.section.b, k.section.h);
-  let guess = 0;
-  let degenerate = false;
-  const errAt = (alpha: number): number => {
-    setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
-    solveSingle(k, dir, Pu, guess, root);
-    guess = root.c;
-    if (Math.hypot(root.Mx, root.My) <= mScale) {
-      degenerate = true;
-      return 0;
-    }
-    return wrapAngle(Math.atan2(root.My, root.Mx) - theta);
-  };
+  st.k = k;
+  st.Pu = Pu;
+  st.theta = theta;
+  st.guess = 0;
+  st.degenerate = false;
+  st.mScale = 1e-12 * k.P0 * Math.max(k.section.b, k.section.h);
   const tol = 1e-10;
   let a = theta;
   let fa = errAt(a);
   let alpha = a;
-  if (Math.abs(fa) > tol && !degenerate) {
-    let b = wrapStep(a, -fa);
+  if (Math.abs(fa) > tol && !st.degenerate) {
+    let b = a + clampStep(-fa);
     let fb = errAt(b);
     let found = Math.abs(fb) <= tol;
     alpha = b;
-    for (let iter = 0; iter < 40 && !found && !degenerate; iter++) {
+    for (let iter = 0; iter < 40 && !found && !st.degenerate; iter++) {
       if (fa < 0 !== fb < 0 && Math.abs(b - a) < Math.PI) {
-        // bracketed: Brent on α (err is continuous away from the ±π wrap)
-        const lo = a;
-        const flo = fa;
-        alpha = findRoot(errAt, lo, b, flo, fb, 1e-13, tol);
+        // bracketed: Brent on α (the error is continuous away from the ±π wrap)
+        alpha = findRoot(errAt, a, b, fa, fb, 1e-13, tol);
         found = true;
         break;
       }
       let next = b - (fb * (b - a)) / (fb - fa);
-      if (!Number.isFinite(next) || Math.abs(next - b) > Math.PI / 4) next = b - Math.sign(fb) * Math.min(Math.abs(fb), Math.PI / 4);
+      if (!Number.isFinite(next) || Math.abs(next - b) > Math.PI / 4) next = b + clampStep(-fb);
       a = b;
       fa = fb;
       b = next;
@@ -99,17 +90,33 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
       if (Math.abs(fb) <= tol) found = true;
     }
   }
+  const dir = k.scratchDir;
   // final α: every root in c, the smallest capacity along θ governs
   setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
-  const scan = buildScan(k, dir);
-  solveScan(k, scan, Pu, Math.cos(theta), Math.sin(theta), root);
+  solveMulti(k, dir, Pu, Math.cos(theta), Math.sin(theta), root);
   if (Number.isNaN(root.c)) solveSingle(k, dir, Pu, 0, root);
   const Mn = Math.hypot(root.Mx, root.My);
   const phi = phiOf(root.epsT, k.epsTy, k.phiC);
   return { phiMn: phi * Mn, Mn, phi, c: root.c, epsT: root.epsT, alpha: wrapAngle(alpha) };
 }
 
-function wrapStep(a: number, step: number): number {
-  const s = Math.max(-Math.PI / 4, Math.min(Math.PI / 4, step));
-  return a + s;
+function clampStep(step: number): number {
+  return Math.max(-Math.PI / 4, Math.min(Math.PI / 4, step));
+}
+
+/** State of the current angle iteration (module level: no closure per call). */
+const st = { k: null as Kernel | null, Pu: 0, theta: 0, guess: 0, degenerate: false, mScale: 0 };
+
+/** Angle between the nominal moment vector at neutral-axis angle α and the target θ. */
+function errAt(alpha: number): number {
+  const k = st.k as Kernel;
+  const dir = k.scratchDir;
+  setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
+  solveSingle(k, dir, st.Pu, st.guess, root);
+  st.guess = root.c;
+  if (Math.hypot(root.Mx, root.My) <= st.mScale) {
+    st.degenerate = true;
+    return 0;
+  }
+  return wrapAngle(Math.atan2(root.My, root.Mx) - st.theta);
 }

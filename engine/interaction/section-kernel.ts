@@ -18,7 +18,7 @@
 import { EPS_CU } from "../materials";
 import { rotateSection } from "../section/rotate-section";
 import { segmentInto } from "../section/measure-circular-segment";
-import { clipRectangleBlock } from "../section/clip-rectangle-block";
+import { rectangleBlockInto } from "../section/clip-rectangle-block";
 import type { ResolvedSection } from "../types";
 import { phiOf } from "./phi-factor";
 
@@ -86,6 +86,8 @@ export interface Kernel {
   uni: (Direction | undefined)[];
   scans: (Scan | undefined)[];
   halfPitch?: ResolvedSection;
+  /** last secant slope dφPn/dc seen by the warm-start solver (kip/in) */
+  slope: number;
   /** reusable direction for arbitrary angles */
   scratchDir: Direction;
 }
@@ -154,6 +156,7 @@ export function kernelOf(section: ResolvedSection): Kernel {
     symAboutY: isMirrored(bx, by, ba, -1, 1),
     uni: [undefined, undefined, undefined, undefined],
     scans: [undefined, undefined, undefined, undefined],
+    slope: 0,
     scratchDir: {
       ux: 0, uy: 1, tmax: 0, depth: 0, d: new Float64Array(n), dt: 0, cFull: 0, cP0: 0,
     },
@@ -258,7 +261,7 @@ export function evaluate(k: Kernel, dir: Direction, c: number, out: Float64Array
     xc = dir.ux * t;
     yc = dir.uy * t;
   } else {
-    clipRectangleBlock(k.halfB, k.halfH, dir.ux, dir.uy, dir.tmax - a, blockOut);
+    rectangleBlockInto(k.halfB, k.halfH, dir.ux, dir.uy, a, blockOut);
     area = blockOut[0] as number;
     xc = blockOut[1] as number;
     yc = blockOut[2] as number;
@@ -268,15 +271,13 @@ export function evaluate(k: Kernel, dir: Direction, c: number, out: Float64Array
   let P = Cc;
   let mx = Cc * yc;
   let my = Cc * xc;
-  const es = k.es;
+  const esEps = k.es * EPS_CU;
   const inv = 1 / c;
   const d = dir.d;
   for (let i = 0; i < n; i++) {
     const di = d[i] as number;
-    let fs = es * EPS_CU * (1 - di * inv);
-    if (fs > fy) fs = fy;
-    else if (fs < -fy) fs = -fy;
-    if (di < a) fs -= k85;
+    // branch-free clamp: the yield tests are data-dependent and mispredict
+    const fs = Math.max(-fy, Math.min(fy, esEps * (1 - di * inv))) - (di < a ? k85 : 0);
     const F = fs * (ba[i] as number);
     P += F;
     mx += F * (by[i] as number);
@@ -289,10 +290,13 @@ export function evaluate(k: Kernel, dir: Direction, c: number, out: Float64Array
 }
 
 const evalOut = new Float64Array(4);
+/** depth of the values held in evalOut (set by phiPnAt) */
+const lastEval = { c: Number.NaN };
 
 /** φ·Pn at c (kip). */
 export function phiPnAt(k: Kernel, dir: Direction, c: number): number {
   evaluate(k, dir, c, evalOut);
+  lastEval.c = c;
   return phiOf(evalOut[3] as number, k.epsTy, k.phiC) * (evalOut[0] as number);
 }
 
@@ -446,8 +450,10 @@ export function solveScan(k: Kernel, scan: Scan, Pu: number, px: number, py: num
     const f0 = (vR[i] as number) - Pu;
     const f1 = (vL[i + 1] as number) - Pu;
     if (f0 < 0 === f1 < 0) continue;
+    lastEval.c = Number.NaN;
     const c = solveC(k, dir, Pu, cR[i] as number, f0, cL[i + 1] as number, f1);
-    evaluate(k, dir, c, rootOut);
+    if (c === lastEval.c) rootOut.set(evalOut);
+    else evaluate(k, dir, c, rootOut);
     const mProj = (rootOut[1] as number) * px + (rootOut[2] as number) * py;
     if (mProj < best) {
       best = mProj;
@@ -472,32 +478,141 @@ export function solveSingle(k: Kernel, dir: Direction, Pu: number, guess: number
   let hi = dir.cP0;
   let flo = -PHI_TENSION * k.Pnt - Pu;
   let fhi = k.phiC * k.P0 - Pu;
+  const ftol = 1e-11 * (k.P0 > 0 ? k.P0 : 1);
+  let c = Number.NaN;
+  lastEval.c = Number.NaN;
   if (guess > 0 && guess < hi) {
-    const g1 = guess * 0.97;
-    const g2 = Math.min(guess * 1.03, hi);
-    const f1 = phiPnAt(k, dir, g1) - Pu;
-    const f2 = phiPnAt(k, dir, g2) - Pu;
-    if (f1 < 0 && f2 >= 0) {
-      lo = g1;
-      flo = f1;
-      hi = g2;
-      fhi = f2;
-    } else if (f1 < 0) {
-      lo = g1;
-      flo = f1;
-    } else {
-      hi = g1;
-      fhi = f1;
+    // warm start: secant steps from the previous root, kept inside a shrinking bracket
+    let c0 = guess;
+    let f0 = phiPnAt(k, dir, c0) - Pu;
+    let slope = k.slope > 0 ? k.slope : (fhi - flo) / (hi - lo);
+    for (let iter = 0; iter < 6; iter++) {
+      if (f0 < 0) {
+        lo = c0;
+        flo = f0;
+      } else {
+        hi = c0;
+        fhi = f0;
+      }
+      if (Math.abs(f0) <= ftol) {
+        c = c0;
+        break;
+      }
+      const c1 = c0 - f0 / slope;
+      if (!(c1 > lo && c1 < hi)) break;
+      const f1 = phiPnAt(k, dir, c1) - Pu;
+      const sNew = (f1 - f0) / (c1 - c0);
+      if (sNew > 0 && Number.isFinite(sNew)) slope = sNew;
+      c0 = c1;
+      f0 = f1;
     }
+    if (slope > 0) k.slope = slope;
+    if (Number.isNaN(c) && Math.abs(f0) <= ftol) c = c0;
   }
-  const c = solveC(k, dir, Pu, lo, flo, hi, fhi);
-  evaluate(k, dir, c, rootOut);
+  if (Number.isNaN(c)) c = solveC(k, dir, Pu, lo, flo, hi, fhi);
+  if (c !== lastEval.c) evaluate(k, dir, c, evalOut);
+  lastEval.c = Number.NaN;
   res.c = c;
-  res.Pn = rootOut[0] as number;
-  res.Mx = rootOut[1] as number;
-  res.My = rootOut[2] as number;
-  res.epsT = rootOut[3] as number;
+  res.Pn = evalOut[0] as number;
+  res.Mx = evalOut[1] as number;
+  res.My = evalOut[2] as number;
+  res.epsT = evalOut[3] as number;
   res.phi = phiOf(res.epsT, k.epsTy, k.phiC);
+  return res;
+}
+
+/** Insert a step (c, area) into the sorted lists, merging coincident steps; returns the new length. */
+function insertStep(cj: Float64Array, aj: Float64Array, m: number, c: number, area: number, mergeTol: number): number {
+  let pos = m;
+  while (pos > 0 && (cj[pos - 1] as number) > c + mergeTol) pos--;
+  if (pos > 0 && Math.abs((cj[pos - 1] as number) - c) <= mergeTol) {
+    aj[pos - 1] = (aj[pos - 1] as number) + area;
+    return m;
+  }
+  for (let q = m; q > pos; q--) {
+    cj[q] = cj[q - 1] as number;
+    aj[q] = aj[q - 1] as number;
+  }
+  cj[pos] = c;
+  aj[pos] = area;
+  return m + 1;
+}
+
+const jumpC = { buf: new Float64Array(16) };
+const jumpA = { buf: new Float64Array(16) };
+const multiOut = new Float64Array(4);
+
+/**
+ * Every root of φPn(c) = Pu for an arbitrary direction without a cached scan: the
+ * nodes are c = 0, each displaced-concrete step c = d/β1 (left value evaluated, right
+ * value = left − φ·0.85 f'c·A of the bars entering the block, exact because φ and the
+ * rest of the section are continuous there), the two φ-transition ends, and c(P0).
+ * Each continuous interval with a sign change is solved by Brent; the smallest moment
+ * projected on (px, py) governs (§7.6). Assumes −0.9 Pnt < Pu ≤ φPn,max.
+ */
+export function solveMulti(k: Kernel, dir: Direction, Pu: number, px: number, py: number, res: RootResult): RootResult {
+  const n = k.n;
+  const cap = n + 3;
+  if (jumpC.buf.length < cap) {
+    jumpC.buf = new Float64Array(cap * 2);
+    jumpA.buf = new Float64Array(cap * 2);
+  }
+  const cj = jumpC.buf;
+  const aj = jumpA.buf;
+  const mergeTol = 1e-9 * dir.cP0;
+  let m = 0;
+  for (let i = 0; i < n; i++) {
+    const di = dir.d[i] as number;
+    if (di > 0 && di < dir.depth) m = insertStep(cj, aj, m, di / k.beta1, k.ba[i] as number, mergeTol);
+  }
+  if (dir.dt > 0) {
+    // φ-transition ends: nodes without a step
+    m = insertStep(cj, aj, m, (EPS_CU * dir.dt) / (EPS_CU + k.epsTy), 0, mergeTol);
+    m = insertStep(cj, aj, m, (EPS_CU * dir.dt) / (2 * EPS_CU + k.epsTy), 0, mergeTol);
+  }
+  let best = Number.POSITIVE_INFINITY;
+  res.c = Number.NaN;
+  let cPrev = 0;
+  let fPrev = -PHI_TENSION * k.Pnt - Pu;
+  for (let j = 0; j <= m; j++) {
+    let cLeft: number;
+    let fLeft: number;
+    let cRight: number;
+    let fRight: number;
+    if (j < m) {
+      const c = cj[j] as number;
+      const area = aj[j] as number;
+      cLeft = area > 0 ? c * (1 - 1e-10) : c;
+      evaluate(k, dir, cLeft, multiOut);
+      const phi = phiOf(multiOut[3] as number, k.epsTy, k.phiC);
+      fLeft = phi * (multiOut[0] as number) - Pu;
+      cRight = area > 0 ? c * (1 + 1e-10) : c;
+      fRight = fLeft - phi * k.k85 * area;
+    } else {
+      cLeft = dir.cP0;
+      fLeft = k.phiC * k.P0 - Pu;
+      cRight = cLeft;
+      fRight = fLeft;
+    }
+    if (fPrev < 0 !== fLeft < 0) {
+      lastEval.c = Number.NaN;
+      const c = solveC(k, dir, Pu, cPrev, fPrev, cLeft, fLeft);
+      if (c === lastEval.c) multiOut.set(evalOut);
+      else evaluate(k, dir, c, multiOut);
+      const mProj = (multiOut[1] as number) * px + (multiOut[2] as number) * py;
+      if (mProj < best) {
+        best = mProj;
+        res.c = c;
+        res.Pn = multiOut[0] as number;
+        res.Mx = multiOut[1] as number;
+        res.My = multiOut[2] as number;
+        res.epsT = multiOut[3] as number;
+        res.phi = phiOf(res.epsT, k.epsTy, k.phiC);
+      }
+    }
+    cPrev = cRight;
+    fPrev = fRight;
+  }
   return res;
 }
 
