@@ -4,7 +4,7 @@
  * whose role lacks the permission gets 403.
  */
 import { findMembership, workspaceOfMark, workspaceOfProject } from "@/db/queries/memberships";
-import { forbidden, notFound, unauthenticated } from "./api/errors";
+import { HttpError, forbidden, notFound, unauthenticated } from "./api/errors";
 import { roleAllows, type Permission, type Role } from "./permissions";
 import type { SessionUser } from "./auth/session-user";
 
@@ -64,4 +64,26 @@ export async function authorizeMark(
 
 function describe(permission: Permission): string {
   return permission.replace(/[A-Z]/g, (c) => ` ${c.toLowerCase()}`);
+}
+
+/**
+ * For rows that belong to a mark (searches, alternatives): reachable exactly when the mark is,
+ * with the same 404 for unknown and foreign rows.
+ */
+export async function authorizeMarkChild<T extends { markId: string }>(
+  user: SessionUser | null,
+  id: string,
+  load: (id: string) => Promise<T | null>,
+  permission: Permission,
+  what: string,
+): Promise<WorkspaceAccess & { projectId: string; markId: string; item: T }> {
+  requireUser(user);
+  const item = UUID.test(id) ? await load(id) : null;
+  if (!item) throw notFound(`${what} not found`);
+  try {
+    return { ...(await authorizeMark(user, item.markId, permission)), item };
+  } catch (error) {
+    if (error instanceof HttpError && error.status === 404) throw notFound(`${what} not found`);
+    throw error;
+  }
 }

@@ -125,3 +125,11 @@ export async function listCandidates(searchId: string, options: { frontOnly?: bo
     : eq(candidates.searchId, searchId);
   return getDb().select().from(candidates).where(where).orderBy(asc(candidates.cost), asc(candidates.utilization), asc(candidates.candidateId));
 }
+
+export async function findCandidate(searchId: string, candidateId: string) {
+  const [row] = await getDb()
+    .select()
+    .from(candidates)
+    .where(and(eq(candidates.searchId, searchId), eq(candidates.candidateId, candidateId)));
+  return row ?? null;
+}
