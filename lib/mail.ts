@@ -5,7 +5,7 @@
  * the SMTP server is down.
  */
 import nodemailer, { type Transporter } from "nodemailer";
-import { and, eq, inArray, lt } from "drizzle-orm";
+import { and, desc, eq, inArray, lt } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { mailOutbox } from "@/db/schema";
 
@@ -72,12 +72,16 @@ export async function sendMail(mail: OutgoingMail): Promise<{ id: string; sent: 
   return { id: row.id, sent: await attemptSend(row) };
 }
 
-/** Retries every pending or failed message that has attempts left. Returns how many were sent. */
-export async function deliverPendingMail(): Promise<number> {
+/**
+ * Retries every pending or failed message that has attempts left (only one workspace's when
+ * given). Returns how many were sent.
+ */
+export async function deliverPendingMail(options: { workspaceId?: string } = {}): Promise<number> {
+  const open = and(inArray(mailOutbox.status, ["pending", "failed"]), lt(mailOutbox.attempts, MAX_ATTEMPTS));
   const rows = await getDb()
     .select()
     .from(mailOutbox)
-    .where(and(inArray(mailOutbox.status, ["pending", "failed"]), lt(mailOutbox.attempts, MAX_ATTEMPTS)));
+    .where(options.workspaceId ? and(open, eq(mailOutbox.workspaceId, options.workspaceId)) : open);
   let sent = 0;
   for (const row of rows) if (await attemptSend(row)) sent++;
   return sent;
@@ -86,4 +90,33 @@ export async function deliverPendingMail(): Promise<number> {
 /** For tests: forget the cached transport so a changed SMTP_PORT takes effect. */
 export function resetMailTransport(): void {
   transport = null;
+}
+
+/**
+ * Whether captured mail may be shown in the app: only while mail goes to the local catcher
+ * (development and tests set MAIL_CATCHER_URL), never against a real SMTP host.
+ */
+export function capturedMailVisible(): boolean {
+  return Boolean(process.env.MAIL_CATCHER_URL) || process.env.CARYATID_SHOW_CAPTURED_MAIL === "1";
+}
+
+/** The newest messages of one workspace's outbox, with their delivery status. */
+export async function listWorkspaceMail(workspaceId: string, limit = 100) {
+  const rows = await getDb()
+    .select({
+      id: mailOutbox.id,
+      to: mailOutbox.to,
+      subject: mailOutbox.subject,
+      text: mailOutbox.text,
+      status: mailOutbox.status,
+      attempts: mailOutbox.attempts,
+      lastError: mailOutbox.lastError,
+      createdAt: mailOutbox.createdAt,
+      sentAt: mailOutbox.sentAt,
+    })
+    .from(mailOutbox)
+    .where(eq(mailOutbox.workspaceId, workspaceId))
+    .orderBy(desc(mailOutbox.createdAt))
+    .limit(limit);
+  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString(), sentAt: r.sentAt?.toISOString() ?? null }));
 }

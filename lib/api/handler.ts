@@ -73,7 +73,7 @@ export function handler<TBodySchema extends z.ZodType | undefined = undefined, T
     try {
       checkOrigin(req);
       const params = (await context.params) ?? {};
-      const user = await getSessionUser();
+      const user = await getSessionUser(req);
       let body: unknown = undefined;
       if (config.body) {
         let raw: unknown;

@@ -1,9 +1,22 @@
+/**
+ * The signed-in user of a request. Route handlers pass their NextRequest, so the signed next-auth
+ * JWT is decoded straight from the request's cookie (no request-scope magic, and the same path in
+ * tests and in the running app); pages and layouts call it without arguments and go through
+ * getServerSession, which reads the cookie via next/headers.
+ */
 import { getServerSession } from "next-auth";
-import { authOptions } from "./options";
+import { getToken, type JWT } from "next-auth/jwt";
+import type { NextRequest } from "next/server";
+import { authOptions, authSecret } from "./options";
 import type { SessionUser } from "./session-user";
 
-/** The signed-in user of this request, or null. Only route handlers, pages and actions call this. */
-export async function getSessionUser(): Promise<SessionUser | null> {
+function userFromToken(token: JWT | null): SessionUser | null {
+  if (!token?.sub || typeof token.email !== "string") return null;
+  return { id: token.sub, email: token.email, name: typeof token.name === "string" ? token.name : "" };
+}
+
+export async function getSessionUser(req?: NextRequest): Promise<SessionUser | null> {
+  if (req) return userFromToken(await getToken({ req, secret: authSecret() }));
   const session = await getServerSession(authOptions);
   const user = session?.user as { id?: string; email?: string | null; name?: string | null } | undefined;
   if (!user?.id || !user.email) return null;
