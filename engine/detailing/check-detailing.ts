@@ -17,13 +17,27 @@ import { checkLateralSupport, countCrossTies, type CrossTieCount } from "./count
  *
  * @param section resolved section
  * @param options dagg (default 0.75 in), rhoMax, exposure (default interior)
- * @returns the rules and the cross-tie count (also used by the quantities)
+ * @returns the rules and the cross-tie count (also used by the quantities); the rule objects
+ *   are shared between calls for the same section: treat them as read-only
  * @example checkDetailing(sec, { dagg: 0.75 }).rules.every((r) => r.ok)
  */
 export function checkDetailing(
   section: ResolvedSection,
   options: CheckOptions = {},
 ): { rules: DetailingResult[]; crossTies: CrossTieCount } {
+  // A resolved section is immutable once built (the interaction kernel caches on it too), so
+  // the rules are cached per section and options: searches re-check one section many times.
+  const key = `${options.rhoMax ?? ""}|${options.dagg ?? ""}|${options.exposure ?? ""}`;
+  const hit = cache.get(section);
+  if (hit !== undefined && hit.key === key) return { rules: hit.rules.slice(), crossTies: hit.crossTies };
+  const result = computeDetailing(section, options);
+  cache.set(section, { key, rules: result.rules, crossTies: result.crossTies });
+  return { rules: result.rules.slice(), crossTies: result.crossTies };
+}
+
+const cache = new WeakMap<ResolvedSection, { key: string; rules: DetailingResult[]; crossTies: CrossTieCount }>();
+
+function computeDetailing(section: ResolvedSection, options: CheckOptions): { rules: DetailingResult[]; crossTies: CrossTieCount } {
   const rules: DetailingResult[] = [...checkSteelRatio(section, options.rhoMax)];
   rules.push(checkBarCount(section));
   rules.push(checkClearSpacing(section, options.dagg ?? 0.75));
