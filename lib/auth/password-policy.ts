@@ -24,10 +24,8 @@ export function describePasswordWeakness(password: string, context: { email?: st
   if (COMMON_PASSWORDS.has(lower)) return "this password is one of the most commonly guessed; choose another";
   if (new Set(lower).size <= 2) return "use more than two different characters";
   if (isRun(lower)) return "a run of consecutive keys or digits is easy to guess; choose another";
-  const local = context.email?.split("@")[0]?.toLowerCase();
-  if (local && local.length >= 4 && lower.includes(local)) return "do not build the password from your e-mail address";
-  const name = context.name?.trim().toLowerCase();
-  if (name && name.length >= 4 && lower.includes(name)) return "do not build the password from your name";
+  if (builtFrom(lower, context.email?.split("@")[0])) return "do not build the password from your e-mail address";
+  if (builtFrom(lower, context.name)) return "do not build the password from your name";
   return null;
 }
 
@@ -40,4 +38,22 @@ function isRun(s: string): boolean {
     if (d !== -1) down = false;
   }
   return up || down;
+}
+
+/**
+ * True when the password is mostly made of the words of `source` (an address's local part or a
+ * name): with those words (4+ letters) taken out, fewer than 6 letters or digits are left.
+ */
+function builtFrom(password: string, source: string | undefined): boolean {
+  const words = (source ?? "").toLowerCase().split(/[^\p{L}\p{N}]+/u).filter((w) => w.length >= 4);
+  if (words.length === 0) return false;
+  let rest = password;
+  let used = false;
+  for (const word of words) {
+    if (rest.includes(word)) {
+      rest = rest.split(word).join("");
+      used = true;
+    }
+  }
+  return used && rest.replace(/[^\p{L}\p{N}]/gu, "").length < 6;
 }
