@@ -11,7 +11,8 @@ import { phiOf } from "./phi-factor";
  * Points are taken at neutral-axis depths c (in) from c(P0) — the smallest c at which
  * the block covers the section and every bar has yielded in compression, so Pn = P0
  * exactly — down to c = 0 (pure tension, Pn = −fy Ast). The grid is uniform in c over
- * the range where the block is partial, with a few points between that and c(P0), and
+ * the range where the block is partial, a tenth of the points geometric in c between that
+ * and c(P0), and
  * always includes: the point where φPn(c) = φPn,max (the corner of the design curve),
  * εt = εty (compression-controlled limit, the balanced point for a two-layer section),
  * and εt = εty + 0.003 (tension-controlled limit). The list holds exactly `points`
@@ -44,7 +45,13 @@ export function interactionDiagram(section: ResolvedSection, axis: Axis, points 
   const py = axis === "y" ? sense : 0;
 
   const special: number[] = [dir.cP0, 0];
-  if (dir.cP0 > dir.cFull * (1 + 1e-9)) special.push(dir.cFull, Math.sqrt(dir.cFull * dir.cP0));
+  // between the full block and c(P0) only the steel strains change: a tenth of the points,
+  // geometric in c, keeps consecutive points close near pure compression
+  if (dir.cP0 > dir.cFull * (1 + 1e-9)) {
+    const nTop = Math.max(2, Math.round(points / 10));
+    const r = dir.cP0 / dir.cFull;
+    for (let i = 0; i < nTop; i++) special.push(dir.cFull * Math.pow(r, i / nTop));
+  }
   if (dir.dt > 0) {
     special.push((EPS_CU * dir.dt) / (EPS_CU + k.epsTy), (EPS_CU * dir.dt) / (2 * EPS_CU + k.epsTy));
   }

@@ -439,7 +439,7 @@ const rootOut = new Float64Array(4);
 
 /**
  * Every root of φPn(c) = Pu bracketed by the scan; returns the one with the smallest
- * moment projected on (px, py) in (Mx, My) space (§7.6), or fills `res` with NaN c
+ * design moment φ·(Mx, My)·(px, py) (§7.6), or fills `res` with NaN c
  * when none is found. Assumes −0.9 Pnt < Pu ≤ φPn,max.
  */
 export function solveScan(k: Kernel, scan: Scan, Pu: number, px: number, py: number, res: RootResult): RootResult {
@@ -454,7 +454,8 @@ export function solveScan(k: Kernel, scan: Scan, Pu: number, px: number, py: num
     const c = solveC(k, dir, Pu, cR[i] as number, f0, cL[i + 1] as number, f1);
     if (c === lastEval.c) rootOut.set(evalOut);
     else evaluate(k, dir, c, rootOut);
-    const mProj = (rootOut[1] as number) * px + (rootOut[2] as number) * py;
+    // the design capacity φMn decides (§7.6), not Mn: the roots may carry different φ
+    const mProj = phiOf(rootOut[3] as number, k.epsTy, k.phiC) * ((rootOut[1] as number) * px + (rootOut[2] as number) * py);
     if (mProj < best) {
       best = mProj;
       res.c = c;
@@ -599,7 +600,7 @@ export function solveMulti(k: Kernel, dir: Direction, Pu: number, px: number, py
       const c = solveC(k, dir, Pu, cPrev, fPrev, cLeft, fLeft);
       if (c === lastEval.c) multiOut.set(evalOut);
       else evaluate(k, dir, c, multiOut);
-      const mProj = (multiOut[1] as number) * px + (multiOut[2] as number) * py;
+      const mProj = phiOf(multiOut[3] as number, k.epsTy, k.phiC) * ((multiOut[1] as number) * px + (multiOut[2] as number) * py);
       if (mProj < best) {
         best = mProj;
         res.c = c;
