@@ -29,7 +29,7 @@ function wrapAngle(a: number): number {
  * `thetaRad` = atan2(My, Mx): measured from the +Mx axis toward +My (θ = 0 is pure Mx
  * compressing the +y face; θ = π/2 pure My compressing the +x face). For each trial
  * neutral-axis angle α (compression side u = (sin α, cos α)) the depth c is solved for
- * φPn(c) = Pu; α is iterated (secant, then Brent once bracketed, |Δθ| ≤ 1e-10 rad)
+ * φPn(c) = Pu; α is iterated (secant, then Brent once bracketed, |Δθ| ≤ 1e-9 rad)
  * until the nominal moment vector (Mnx, Mny) points along θ. At the final α every
  * root in c is examined and the smallest capacity governs (§7.6). The capacity is the
  * magnitude φ √(Mnx² + Mny²).
@@ -63,13 +63,17 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   st.theta = theta;
   st.guess = 0;
   st.degenerate = false;
+  st.lastAlpha = Number.NaN;
   st.mScale = 1e-12 * k.P0 * Math.max(k.section.b, k.section.h);
-  const tol = 1e-10;
-  let a = theta;
+  const tol = 1e-9;
+  // first guess from the last solution's tan α / tan θ (elastic Igx/Igy at first: the
+  // elastic neutral axis of a moment at θ has tan α = tan θ · Ix/Iy)
+  let a = Math.atan2(k.tanRatio * Math.sin(theta), Math.cos(theta));
   let fa = errAt(a);
   let alpha = a;
   if (Math.abs(fa) > tol && !st.degenerate) {
-    let b = a + clampStep(-fa);
+    // first step with the slope dθ/dα seen last time on this section (1 for a circle)
+    let b = a + clampStep(-fa / k.alphaSlope);
     let fb = errAt(b);
     let found = Math.abs(fb) <= tol;
     alpha = b;
@@ -80,7 +84,9 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
         found = true;
         break;
       }
-      let next = b - (fb * (b - a)) / (fb - fa);
+      const slope = (fb - fa) / (b - a);
+      if (slope > 0.05 && slope < 20) k.alphaSlope = slope;
+      let next = b - fb / slope;
       if (!Number.isFinite(next) || Math.abs(next - b) > Math.PI / 4) next = b + clampStep(-fb);
       a = b;
       fa = fb;
@@ -90,10 +96,16 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
       if (Math.abs(fb) <= tol) found = true;
     }
   }
+  const sc = Math.sin(theta) * Math.cos(theta);
+  if (Math.abs(sc) > 1e-3 && !st.degenerate) {
+    const ratio = Math.tan(alpha) / Math.tan(theta);
+    if (ratio > 0.05 && ratio < 20) k.tanRatio = ratio;
+  }
   const dir = k.scratchDir;
   // final α: every root in c, the smallest capacity along θ governs
   setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
-  solveMulti(k, dir, Pu, Math.cos(theta), Math.sin(theta), root);
+  const known = st.lastAlpha === alpha ? st.guess : Number.NaN;
+  solveMulti(k, dir, Pu, Math.cos(theta), Math.sin(theta), root, known);
   if (Number.isNaN(root.c)) solveSingle(k, dir, Pu, 0, root);
   const Mn = Math.hypot(root.Mx, root.My);
   const phi = phiOf(root.epsT, k.epsTy, k.phiC);
@@ -105,15 +117,16 @@ function clampStep(step: number): number {
 }
 
 /** State of the current angle iteration (module level: no closure per call). */
-const st = { k: null as Kernel | null, Pu: 0, theta: 0, guess: 0, degenerate: false, mScale: 0 };
+const st = { k: null as Kernel | null, Pu: 0, theta: 0, guess: 0, degenerate: false, mScale: 0, lastAlpha: Number.NaN };
 
 /** Angle between the nominal moment vector at neutral-axis angle α and the target θ. */
 function errAt(alpha: number): number {
   const k = st.k as Kernel;
   const dir = k.scratchDir;
   setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
-  solveSingle(k, dir, st.Pu, st.guess, root);
+  solveSingle(k, dir, st.Pu, st.guess, root, 1e-10);
   st.guess = root.c;
+  st.lastAlpha = alpha;
   if (Math.hypot(root.Mx, root.My) <= st.mScale) {
     st.degenerate = true;
     return 0;

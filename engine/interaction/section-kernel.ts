@@ -88,6 +88,10 @@ export interface Kernel {
   halfPitch?: ResolvedSection;
   /** last secant slope dφPn/dc seen by the warm-start solver (kip/in) */
   slope: number;
+  /** last slope dθ/dα seen by the biaxial angle iteration */
+  alphaSlope: number;
+  /** tan α / tan θ of the last biaxial solution (first guess of the next); starts at Igx/Igy */
+  tanRatio: number;
   /** reusable direction for arbitrary angles */
   scratchDir: Direction;
 }
@@ -157,6 +161,8 @@ export function kernelOf(section: ResolvedSection): Kernel {
     uni: [undefined, undefined, undefined, undefined],
     scans: [undefined, undefined, undefined, undefined],
     slope: 0,
+    alphaSlope: 1,
+    tanRatio: section.Igy > 0 ? section.Igx / section.Igy : 1,
     scratchDir: {
       ux: 0, uy: 1, tmax: 0, depth: 0, d: new Float64Array(n), dt: 0, cFull: 0, cP0: 0,
     },
@@ -474,12 +480,14 @@ export function solveScan(k: Kernel, scan: Scan, Pu: number, px: number, py: num
  * starting from a guess (used inside the biaxial angle iteration, where speed matters
  * more than catching every root; the final angle is re-solved with a full scan).
  */
-export function solveSingle(k: Kernel, dir: Direction, Pu: number, guess: number, res: RootResult): RootResult {
+export function solveSingle(
+  k: Kernel, dir: Direction, Pu: number, guess: number, res: RootResult, ftolRel = 1e-11,
+): RootResult {
   let lo = 0;
   let hi = dir.cP0;
   let flo = -PHI_TENSION * k.Pnt - Pu;
   let fhi = k.phiC * k.P0 - Pu;
-  const ftol = 1e-11 * (k.P0 > 0 ? k.P0 : 1);
+  const ftol = ftolRel * (k.P0 > 0 ? k.P0 : 1);
   let c = Number.NaN;
   lastEval.c = Number.NaN;
   if (guess > 0 && guess < hi) {
@@ -551,7 +559,9 @@ const multiOut = new Float64Array(4);
  * Each continuous interval with a sign change is solved by Brent; the smallest moment
  * projected on (px, py) governs (§7.6). Assumes −0.9 Pnt < Pu ≤ φPn,max.
  */
-export function solveMulti(k: Kernel, dir: Direction, Pu: number, px: number, py: number, res: RootResult): RootResult {
+export function solveMulti(
+  k: Kernel, dir: Direction, Pu: number, px: number, py: number, res: RootResult, known = Number.NaN,
+): RootResult {
   const n = k.n;
   const cap = n + 3;
   if (jumpC.buf.length < cap) {
@@ -597,7 +607,8 @@ export function solveMulti(k: Kernel, dir: Direction, Pu: number, px: number, py
     }
     if (fPrev < 0 !== fLeft < 0) {
       lastEval.c = Number.NaN;
-      const c = solveC(k, dir, Pu, cPrev, fPrev, cLeft, fLeft);
+      // a root already known to lie in this interval (from the angle iteration) is reused
+      const c = known > cPrev && known < cLeft ? known : solveC(k, dir, Pu, cPrev, fPrev, cLeft, fLeft);
       if (c === lastEval.c) multiOut.set(evalOut);
       else evaluate(k, dir, c, multiOut);
       const mProj = phiOf(multiOut[3] as number, k.epsTy, k.phiC) * ((multiOut[1] as number) * px + (multiOut[2] as number) * py);

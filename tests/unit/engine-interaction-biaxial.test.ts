@@ -1,0 +1,219 @@
+import { describe, expect, it } from "vitest";
+import { resolveSection, rotateSection } from "@/engine/section";
+import {
+  breslerReciprocal, circleCapacityAt, interactionDiagram, phiMnAt, phiMnAtAngle, sectionForcesAt,
+} from "@/engine/interaction";
+import type { ResolvedSection, SectionInput } from "@/engine/types";
+
+const base: SectionInput = {
+  shape: "rect", b: 18, h: 22, fc: 5, fy: 60, confinement: "tied", cover: 1.5,
+  layout: { type: "perimeter", size: "#8", nb: 3, nh: 3 },
+};
+const S = resolveSection(base);
+const circleInput: SectionInput = {
+  shape: "circle", D: 24, fc: 5, fy: 60, confinement: "tied", cover: 1.5,
+  layout: { type: "circle", size: "#8", n: 8 },
+};
+const C = resolveSection(circleInput);
+const rel = (a: number, b: number): number => Math.abs(a - b) / Math.max(Math.abs(b), 1e-12);
+const deg = Math.PI / 180;
+
+/**
+ * Independent reference: sweep the neutral-axis angle finely, solve c by plain bisection
+ * for φPn = Pu, and read the capacity in direction θ off the resulting moment contour by
+ * linear interpolation in polar coordinates.
+ */
+function contourCapacity(section: ResolvedSection, Pu: number, theta: number, steps = 1440): number {
+  const pts: { ang: number; r: number }[] = [];
+  for (let i = 0; i <= steps; i++) {
+    const alpha = theta - Math.PI / 2 + (Math.PI * i) / steps;
+    let lo = 1e-9;
+    let hi = 500;
+    for (let j = 0; j < 100; j++) {
+      const mid = (lo + hi) / 2;
+      const f = sectionForcesAt(section, alpha, mid);
+      if (f.phi * f.Pn < Pu) lo = mid;
+      else hi = mid;
+    }
+    const f = sectionForcesAt(section, alpha, (lo + hi) / 2);
+    pts.push({ ang: Math.atan2(f.Mny, f.Mnx), r: f.phi * Math.hypot(f.Mnx, f.Mny) });
+  }
+  const wrap = (a: number): number => Math.atan2(Math.sin(a), Math.cos(a));
+  for (let i = 1; i < pts.length; i++) {
+    const p = pts[i - 1] as { ang: number; r: number };
+    const q = pts[i] as { ang: number; r: number };
+    const dp = wrap(p.ang - theta);
+    const dq = wrap(q.ang - theta);
+    if (dp <= 0 && dq >= 0 && dq - dp < 0.5) {
+      const t = dq === dp ? 0 : -dp / (dq - dp);
+      return p.r + t * (q.r - p.r);
+    }
+  }
+  throw new Error("direction not bracketed");
+}
+
+describe("phiMnAtAngle — rectangular sections", () => {
+  it("θ = 0 and θ = 90° equal phiMnAt about x and about y (symmetric section)", () => {
+    for (const Pu of [-200, 0, 310, 700, S.phiPnMax]) {
+      expect(rel(phiMnAtAngle(S, Pu, 0)?.phiMn ?? 0, phiMnAt(S, "x", Pu)?.phiMn ?? 1)).toBeLessThan(1e-9);
+      expect(rel(phiMnAtAngle(S, Pu, Math.PI / 2)?.phiMn ?? 0, phiMnAt(S, "y", Pu)?.phiMn ?? 1)).toBeLessThan(1e-9);
+      expect(rel(phiMnAtAngle(S, Pu, Math.PI)?.phiMn ?? 0, phiMnAt(S, "x", Pu, -1)?.phiMn ?? 1)).toBeLessThan(1e-9);
+      expect(phiMnAtAngle(S, Pu, 0)?.alpha).toBeCloseTo(0, 12);
+    }
+  });
+  it("returns a neutral axis whose moment points along θ with φPn = Pu", () => {
+    for (const Pu of [0, 150, 310, 600, 900]) {
+      for (let t = -170; t <= 180; t += 25) {
+        const theta = t * deg;
+        const cap = phiMnAtAngle(S, Pu, theta);
+        if (cap === null) throw new Error("expected a capacity");
+        const f = sectionForcesAt(S, cap.alpha, cap.c);
+        expect(Math.abs(f.phi * f.Pn - Pu)).toBeLessThan(1e-8 * S.P0);
+        const err = Math.atan2(Math.sin(Math.atan2(f.Mny, f.Mnx) - theta), Math.cos(Math.atan2(f.Mny, f.Mnx) - theta));
+        expect(Math.abs(err)).toBeLessThan(1e-6);
+        expect(rel(cap.phiMn, f.phi * Math.hypot(f.Mnx, f.Mny))).toBeLessThan(1e-9);
+      }
+    }
+  });
+  it("agrees with an independent fine sweep of the neutral-axis angle", () => {
+    for (const [Pu, t] of [[310, 30], [310, 60], [600, 45], [0, 20], [900, 75]] as const) {
+      const ref = contourCapacity(S, Pu, t * deg);
+      expect(rel(phiMnAtAngle(S, Pu, t * deg)?.phiMn ?? 0, ref)).toBeLessThan(2e-3);
+    }
+  });
+  it("is symmetric for a doubly symmetric section: θ, −θ and π − θ give the same capacity", () => {
+    for (const t of [15, 40, 70]) {
+      const a = phiMnAtAngle(S, 400, t * deg)?.phiMn ?? 0;
+      expect(rel(phiMnAtAngle(S, 400, -t * deg)?.phiMn ?? 0, a)).toBeLessThan(1e-6);
+      expect(rel(phiMnAtAngle(S, 400, Math.PI - t * deg)?.phiMn ?? 0, a)).toBeLessThan(1e-6);
+      expect(rel(phiMnAtAngle(S, 400, t * deg + 2 * Math.PI)?.phiMn ?? 0, a)).toBeLessThan(1e-9);
+    }
+  });
+  it("matches the uniaxial senses of a section not symmetric about x", () => {
+    const U = resolveSection({
+      ...base, layout: undefined,
+      bars: [
+        ...[-6, -2, 2, 6].map((x) => ({ x, y: 8, size: "#9" as const })),
+        { x: -6, y: -8, size: "#5" }, { x: 6, y: -8, size: "#5" },
+      ],
+    });
+    for (const Pu of [0, 300]) {
+      expect(rel(phiMnAtAngle(U, Pu, 0)?.phiMn ?? 0, phiMnAt(U, "x", Pu, 1)?.phiMn ?? 1)).toBeLessThan(1e-9);
+      expect(rel(phiMnAtAngle(U, Pu, Math.PI)?.phiMn ?? 0, phiMnAt(U, "x", Pu, -1)?.phiMn ?? 1)).toBeLessThan(1e-9);
+      expect(rel(phiMnAtAngle(U, Pu, 35 * deg)?.phiMn ?? 0, contourCapacity(U, Pu, 35 * deg))).toBeLessThan(2e-3);
+    }
+  });
+  it("is null outside −0.9 Pnt … φPn,max and zero at pure tension", () => {
+    expect(phiMnAtAngle(S, S.phiPnMax * 1.0001, 0.3)).toBeNull();
+    expect(phiMnAtAngle(S, -0.9 * S.Pnt * 1.0001, 0.3)).toBeNull();
+    expect(phiMnAtAngle(S, -0.9 * S.Pnt, 0.3)?.phiMn).toBeCloseTo(0, 9);
+    expect(() => phiMnAtAngle(S, 100, Number.NaN)).toThrow(RangeError);
+    expect(() => phiMnAtAngle(S, Number.NaN, 0)).toThrow(RangeError);
+  });
+});
+
+describe("circular sections", () => {
+  it("the capacity repeats with the bar pitch and is symmetric about each bar", () => {
+    for (const t of [5, 10, 20]) {
+      const a = phiMnAtAngle(C, 300, t * deg)?.phiMn ?? 0;
+      expect(rel(phiMnAtAngle(C, 300, (t + 45) * deg)?.phiMn ?? 0, a)).toBeLessThan(1e-6);
+      expect(rel(phiMnAtAngle(C, 300, -t * deg)?.phiMn ?? 0, a)).toBeLessThan(1e-6);
+    }
+  });
+  it("circleCapacityAt is the smallest over every direction (§7.5) and within a few % of all", () => {
+    for (const Pu of [-100, 0, 300, 600, C.phiPnMax]) {
+      const cap = circleCapacityAt(C, Pu)?.phiMn ?? 0;
+      let lo = Number.POSITIVE_INFINITY;
+      let hi = 0;
+      for (let t = 0; t <= 360; t += 2.5) {
+        const v = phiMnAtAngle(C, Pu, t * deg)?.phiMn ?? 0;
+        lo = Math.min(lo, v);
+        hi = Math.max(hi, v);
+        expect(v).toBeGreaterThanOrEqual(cap * (1 - 1e-6));
+      }
+      expect(rel(cap, lo)).toBeLessThan(1e-6); // the minimum sits at one of the two orientations
+      expect(hi / cap).toBeLessThan(1.05);
+    }
+  });
+  it("circleCapacityAt is the smaller of the layout as given and turned by half a pitch", () => {
+    const asGiven = phiMnAt(C, "x", 300)?.phiMn ?? 0;
+    const turned = phiMnAt(rotateSection(C, Math.PI / 8), "x", 300)?.phiMn ?? 0;
+    expect(asGiven).not.toBeCloseTo(turned, 3);
+    expect(circleCapacityAt(C, 300)?.phiMn).toBe(Math.min(asGiven, turned));
+  });
+  it("works for an odd bar count with a spiral (not symmetric about x)", () => {
+    const odd = resolveSection({ ...circleInput, confinement: "spiral", layout: { type: "circle", size: "#9", n: 7 } });
+    const cap = circleCapacityAt(odd, 400)?.phiMn ?? 0;
+    for (let t = 0; t < 360; t += 5) {
+      expect(phiMnAtAngle(odd, 400, t * deg)?.phiMn ?? 0).toBeGreaterThanOrEqual(cap * (1 - 1e-6));
+    }
+    expect(rel(phiMnAtAngle(odd, 400, 17 * deg)?.phiMn ?? 0, contourCapacity(odd, 400, 17 * deg))).toBeLessThan(2e-3);
+  });
+  it("uses the exact segment: pure bending agrees with an independent strip integration", () => {
+    // independent check: integrate 0.85 f'c over 4000 strips of the compression segment
+    const cap = phiMnAt(C, "x", 0);
+    if (cap === null) throw new Error("expected a capacity");
+    const R = 12;
+    const a = C.beta1 * cap.c;
+    let Cc = 0;
+    let Mc = 0;
+    const n = 4000;
+    for (let i = 0; i < n; i++) {
+      const y = R - a + ((i + 0.5) * a) / n;
+      const w = 2 * Math.sqrt(R * R - y * y);
+      Cc += 0.85 * 5 * w * (a / n);
+      Mc += 0.85 * 5 * w * (a / n) * y;
+    }
+    let Ps = 0;
+    let Ms = 0;
+    for (const bar of C.bars) {
+      const d = R - bar.y;
+      let fs = Math.max(-60, Math.min(60, 29000 * 0.003 * (1 - d / cap.c)));
+      if (d < a) fs -= 0.85 * 5;
+      Ps += fs * bar.area;
+      Ms += fs * bar.area * bar.y;
+    }
+    expect(Math.abs(Cc + Ps)).toBeLessThan(0.05); // equilibrium at Pu = 0 (strip error only)
+    expect(rel(cap.Mn, Mc + Ms)).toBeLessThan(1e-4);
+  });
+  it("rejects a rectangle", () => {
+    expect(() => circleCapacityAt(S, 100)).toThrow(RangeError);
+    expect(circleCapacityAt(C, C.phiPnMax * 1.01)).toBeNull();
+  });
+});
+
+describe("breslerReciprocal (comparison only)", () => {
+  it("reduces to P0 with no eccentricity and to Pnx with ex = 0", () => {
+    const z = breslerReciprocal(S, 0, 0);
+    expect(z?.Pn).toBeCloseTo(S.P0, 9);
+    const x = breslerReciprocal(S, 0, 6);
+    expect(x?.Pn).toBeCloseTo(x?.Pnx ?? 0, 9);
+    expect(x?.Pny).toBeCloseTo(S.P0, 9);
+  });
+  it("uniaxial strengths match the diagram point at the same eccentricity", () => {
+    const r = breslerReciprocal(S, 4, 6);
+    if (r === null) throw new Error("expected a result");
+    const at = (axis: "x" | "y", e: number): number => {
+      const pts = interactionDiagram(S, axis, 2000).points;
+      for (let i = 1; i < pts.length; i++) {
+        const p = pts[i - 1] as { Pn: number; Mn: number };
+        const q = pts[i] as { Pn: number; Mn: number };
+        const fp = p.Mn - e * p.Pn;
+        const fq = q.Mn - e * q.Pn;
+        if (fp < 0 !== fq < 0) return p.Pn + (fp / (fp - fq)) * (q.Pn - p.Pn);
+      }
+      return Number.NaN;
+    };
+    expect(rel(r.Pnx, at("x", 6))).toBeLessThan(1e-3);
+    expect(rel(r.Pny, at("y", 4))).toBeLessThan(1e-3);
+    expect(r.Pn).toBeLessThan(Math.min(r.Pnx, r.Pny));
+    expect(1 / r.Pn).toBeCloseTo(1 / r.Pnx + 1 / r.Pny - 1 / S.P0, 12);
+    expect(r.phiPn).toBeLessThanOrEqual(S.phiPnMax);
+  });
+  it("falls as the eccentricity grows", () => {
+    const a = breslerReciprocal(S, 2, 3)?.Pn ?? 0;
+    const b = breslerReciprocal(S, 4, 6)?.Pn ?? 0;
+    expect(b).toBeLessThan(a);
+    expect(() => breslerReciprocal(S, Number.NaN, 1)).toThrow(RangeError);
+  });
+});
