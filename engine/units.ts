@@ -58,7 +58,7 @@ export function convertStress(value: number, to: UnitSystem): number {
 export function convertMoment(value: number, to: UnitSystem): number {
   return to === "SI" ? value * KNM_PER_KIPIN : value / KNM_PER_KIPIN;
 }
-/** Convert a flexural stiffness: kip-in² → kN·m² ("SI") or back ("US"). */
+/** Convert a flexural stiffness: kip-in² → kN·m² ("SI") or back ("US"). @example convertStiffness(1e7, "SI") // 28 699 kN·m² */
 export function convertStiffness(value: number, to: UnitSystem): number {
   return to === "SI" ? value * KNM2_PER_KIPIN2 : value / KNM2_PER_KIPIN2;
 }
@@ -77,6 +77,7 @@ function convertEndMoments(m: EndMoments, to: UnitSystem): EndMoments {
 /**
  * Convert a section as given (dimensions, strengths, bar coordinates, tie spacing).
  * Bar designations are not converted: US and A615M sizes are both understood by the engine.
+ * @example convertSectionInput(siSection, "US").b // 457.2 mm → 18 in
  */
 export function convertSectionInput(s: SectionInput, to: UnitSystem): SectionInput {
   const L = (v: number) => convertLength(v, to);
@@ -98,7 +99,7 @@ function convertSway(d: SwayAxisData, to: UnitSystem): SwayAxisData {
   return "Q" in d ? { Q: d.Q } : { sumPu: convertForce(d.sumPu, to), sumPc: convertForce(d.sumPc, to) };
 }
 
-/** Convert member data (lengths; sway ΣPu, ΣPc). */
+/** Convert member data (lengths; sway ΣPu, ΣPc). @example convertMemberInput({ lu: 5181.6, kx: 1, ky: 1, braced: true }, "US").lu // 204 */
 export function convertMemberInput(m: MemberInput, to: UnitSystem): MemberInput {
   const out: MemberInput = { ...m, lu: convertLength(m.lu, to) };
   if (m.lux !== undefined) out.lux = convertLength(m.lux, to);
@@ -113,7 +114,7 @@ export function convertMemberInput(m: MemberInput, to: UnitSystem): MemberInput 
   return out;
 }
 
-/** Convert a load case (Pu, end moments). */
+/** Convert a load case (Pu kN ⇄ kip, end moments kN·m ⇄ kip-in). @example convertLoadCase(load, "SI") */
 export function convertLoadCase(l: LoadCase, to: UnitSystem): LoadCase {
   const out: LoadCase = { ...l, Pu: convertForce(l.Pu, to), Mx: convertEndMoments(l.Mx, to) };
   if (l.My !== undefined) out.My = convertEndMoments(l.My, to);
@@ -133,6 +134,7 @@ function mapKeys(rec: Record<string, number>, keyTo: UnitSystem, f: (v: number) 
 /**
  * Convert a price book. SI prices are per m³ (concrete, keyed by f'c in MPa), per kg
  * (steel) and per m² (forms); US per yd³ (keyed by f'c in ksi), lb and ft².
+ * @example convertPrices(siPrices, "US").concrete["5"]
  */
 export function convertPrices(p: Prices, to: UnitSystem): Prices {
   // a price per unit converts inversely to the unit itself
@@ -148,7 +150,7 @@ export function convertPrices(p: Prices, to: UnitSystem): Prices {
   };
 }
 
-/** Convert carbon factors: kgCO2e per m³ / kg (SI) or per yd³ / lb (US). */
+/** Convert carbon factors: kgCO2e per m³ / kg (SI) or per yd³ / lb (US). @example convertCarbon(c, "US").steel */
 export function convertCarbon(c: CarbonFactors, to: UnitSystem): CarbonFactors {
   const perVolume = (v: number) => (to === "SI" ? v / M3_PER_YD3 : v * M3_PER_YD3);
   const perMass = (v: number) => (to === "SI" ? v / KG_PER_LB : v * KG_PER_LB);
@@ -217,6 +219,7 @@ function convertCase(c: CaseResult, to: UnitSystem): CaseResult {
  * Convert a check result from the engine's US units to SI (or back). Quantities become
  * m³ of concrete, kg of steel and m² of forms under the same field names; cost totals are
  * currency and stay; carbon stays kgCO2e.
+ * @example convertCheckOutput(checkMember(usInput), "SI").cases[0].x.Mc // kN·m
  */
 export function convertCheckOutput(o: CheckOutput, to: UnitSystem): CheckOutput {
   const vol = (v: number) => (to === "SI" ? v * M3_PER_YD3 : v / M3_PER_YD3);
@@ -262,7 +265,7 @@ export function convertCheckOutput(o: CheckOutput, to: UnitSystem): CheckOutput 
   return out;
 }
 
-/** Convert an interaction diagram: c in mm, forces kN, moments kN·m. */
+/** Convert an interaction diagram: c in mm, forces kN, moments kN·m. @example convertDiagram(d, "SI").P0 */
 export function convertDiagram(d: DiagramResult, to: UnitSystem): DiagramResult {
   return {
     P0: convertForce(d.P0, to),

@@ -1,7 +1,7 @@
 import { barProperties, tieSizeFor } from "../rebar";
 import type { BarSize, DetailingResult, ResolvedSection } from "../types";
 
-/** The largest and smallest longitudinal bars (by diameter). */
+/** The largest and smallest longitudinal bars (by diameter, in). @example findBarExtremes(sec).dbMax // 1.0 for #8 bars */
 export function findBarExtremes(section: ResolvedSection): { largest: BarSize; dbMax: number; dbMin: number } {
   let largest: BarSize = "#3";
   let dbMax = 0;

@@ -87,12 +87,15 @@ export function countCrossTies(section: ResolvedSection): CrossTieCount {
   const right: ResolvedBar[] = [];
   let interior = 0;
   for (const b of bars) {
-    let on = false;
-    if (b.y >= ymax - FACE_TOL) (top.push(b), (on = true));
-    if (b.y <= ymin + FACE_TOL && ymax - ymin > FACE_TOL) (bottom.push(b), (on = true));
-    if (b.x >= xmax - FACE_TOL) (right.push(b), (on = true));
-    if (b.x <= xmin + FACE_TOL && xmax - xmin > FACE_TOL) (left.push(b), (on = true));
-    if (!on) interior++;
+    const onTop = b.y >= ymax - FACE_TOL;
+    const onBottom = b.y <= ymin + FACE_TOL && ymax - ymin > FACE_TOL;
+    const onRight = b.x >= xmax - FACE_TOL;
+    const onLeft = b.x <= xmin + FACE_TOL && xmax - xmin > FACE_TOL;
+    if (onTop) top.push(b);
+    if (onBottom) bottom.push(b);
+    if (onRight) right.push(b);
+    if (onLeft) left.push(b);
+    if (!onTop && !onBottom && !onRight && !onLeft) interior++;
   }
   const bx = (b: ResolvedBar) => b.x;
   const by = (b: ResolvedBar) => b.y;

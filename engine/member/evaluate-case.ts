@@ -53,7 +53,7 @@ export interface CaseScratch {
   lastAngleCap: number;
 }
 
-/** Fresh scratch storage. */
+/** Fresh scratch storage. @example const s = createCaseScratch(); evaluateCase(prep, load, s) */
 export function createCaseScratch(): CaseScratch {
   return {
     chainX: createMagnifierChain(),
@@ -85,7 +85,10 @@ const ZERO_MOMENTS: EndMoments = { M1: 0, M2: 0, curvature: "double" };
 /**
  * Run the chain for one axis and segment: sway magnification of the end moments
  * (M = Mns + δs Ms, 6.6.4.6.1), the segment's end moments off the linear moment line
- * (§7.8), then the nonsway magnifier. Returns false when the sway state forbids a check.
+ * (§7.8), then the nonsway magnifier (moments kip-in, Pu kip). Returns false when the sway
+ * state forbids a check.
+ *
+ * @example runAxis(prep, prep.x, prep.swayX, load.Mx, load.Pu, load.betaDns, 0, seg, chain)
  */
 export function runAxis(
   prep: PreparedMember,
@@ -127,7 +130,10 @@ export function runAxis(
   return true;
 }
 
-/** φMn about x at Pu (cached in the scratch), kip-in; −1 when Pu is outside the axial range. */
+/**
+ * φMn about x at Pu (cached in the scratch), kip-in; −1 when Pu is outside the axial range.
+ * Circles use circleCapacityAt (§7.5). @example capacityX(prep, s, 300) // 4942
+ */
 export function capacityX(prep: PreparedMember, s: CaseScratch, Pu: number): number {
   if (prep.circle) return capacityCircle(prep, s, Pu);
   if (Number.isNaN(s.capX)) {
@@ -137,7 +143,7 @@ export function capacityX(prep: PreparedMember, s: CaseScratch, Pu: number): num
   return s.capX;
 }
 
-/** φMn about y at Pu (cached), kip-in; −1 when none. */
+/** φMn about y at Pu (cached), kip-in; −1 when none. @example capacityY(prep, s, 300) */
 export function capacityY(prep: PreparedMember, s: CaseScratch, Pu: number): number {
   if (prep.circle) return capacityCircle(prep, s, Pu);
   if (Number.isNaN(s.capY)) {
@@ -236,6 +242,7 @@ function fail(s: CaseScratch, f: Failure, axis: Axis | null): number {
  *
  * @returns the case utilization (Infinity when the case fails outright: unstable, over the
  *   1.4 cap, Pu outside the axial range, sway data missing)
+ * @example evaluateCase(prepareMember(sec, member), load, createCaseScratch()) // 0.87
  */
 export function evaluateCase(prep: PreparedMember, load: LoadCase, s: CaseScratch): number {
   const sec = prep.section;
@@ -275,15 +282,30 @@ export function evaluateCase(prep: PreparedMember, load: LoadCase, s: CaseScratc
     const cy = s.chainY;
     if (!cx.needsMinimum && !cy.needsMinimum) {
       const u = variantUtilization(prep, s, cx.given, cy.given, cx.slender, cy.slender, Pu, axial);
-      if (u > best) take(s, seg, "given"), (best = u), (bestFail = s.vFail), (bestAxis = s.vAxis);
+      if (u > best) {
+        take(s, seg, "given");
+        best = u;
+        bestFail = s.vFail;
+        bestAxis = s.vAxis;
+      }
     } else {
       if (cx.needsMinimum) {
         const u = variantUtilization(prep, s, cx.raised, cy.given, true, cy.slender, Pu, axial);
-        if (u > best) take(s, seg, "raise-x"), (best = u), (bestFail = s.vFail), (bestAxis = s.vAxis);
+        if (u > best) {
+          take(s, seg, "raise-x");
+          best = u;
+          bestFail = s.vFail;
+          bestAxis = s.vAxis;
+        }
       }
       if (cy.needsMinimum) {
         const u = variantUtilization(prep, s, cx.given, cy.raised, cx.slender, true, Pu, axial);
-        if (u > best) take(s, seg, "raise-y"), (best = u), (bestFail = s.vFail), (bestAxis = s.vAxis);
+        if (u > best) {
+          take(s, seg, "raise-y");
+          best = u;
+          bestFail = s.vFail;
+          bestAxis = s.vAxis;
+        }
       }
     }
     if (best === Infinity) break;

@@ -16,7 +16,7 @@ export function formatMoment(kipIn: number, units: "US" | "SI"): string {
   return units === "SI" ? `${round3(convertMoment(kipIn, "SI"))} kN·m` : `${round3(kipIn)} kip-in`;
 }
 
-/** Round to three significant figures beyond the integer part (readable, not lossy for checking). */
+/** Round for reason texts: integers above 1000, one decimal above 100, two above 1. @example round3(412.34) // "412.3" */
 export function round3(v: number): string {
   const a = Math.abs(v);
   if (a >= 1000) return v.toFixed(0);

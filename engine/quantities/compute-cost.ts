@@ -12,7 +12,7 @@ export function lookupByStrength(table: Record<string, number>, fc: number, what
   const direct = table[String(fc)];
   if (direct !== undefined) return direct;
   for (const [k, v] of Object.entries(table)) {
-    if (Math.abs(Number(k) - fc) <= 1e-6 * Math.max(1, fc)) return v;
+    if (Math.abs(Number(k) - fc) <= 1e-5 * Math.max(1, fc)) return v; // SI keys converted to ksi carry 6 digits
   }
   throw new RangeError(`${what} has no entry for f'c = ${fc} ksi (keys: ${Object.keys(table).join(", ")})`);
 }

@@ -45,7 +45,7 @@ export function addStrengthIssues(
 }
 
 function hasStrengthKey(table: Record<string, number>, fc: number): boolean {
-  return Object.keys(table).some((k) => Math.abs(Number(k) - fc) <= 1e-6 * Math.max(1, fc));
+  return Object.keys(table).some((k) => Math.abs(Number(k) - fc) <= 1e-5 * Math.max(1, fc));
 }
 
 export const checkRequestSchema = z

@@ -20,7 +20,6 @@ const rect = (over: Partial<SectionInput> = {}): SectionInput => ({
   shape: "rect", b: 18, h: 22, fc: 5, fy: 60, confinement: "tied", cover: 1.5,
   layout: { type: "perimeter", size: "#8", nb: 3, nh: 4 }, ...over,
 });
-const rule = (rules: { rule: string }[], name: string) => rules.find((r) => r.rule === name)!;
 
 describe("checkSteelRatio (10.6.1.1)", () => {
   it("1 % ≤ ρ ≤ 8 %, rhoMax lowers the cap", () => {
@@ -152,7 +151,7 @@ describe("countCrossTies (25.7.2.3, column-checks.md §7.11)", () => {
       shape: "rect", b: 20, h: 20, fc: 5, fy: 60, confinement: "tied", cover: 1.5,
       bars: [{ x: -7, y: 7, size: "#8" }, { x: 7, y: 7, size: "#8" }, { x: 7, y: -7, size: "#8" }, { x: -7, y: -7, size: "#8" }, { x: 0, y: 0, size: "#8" }],
     });
-    const r = rule(checkDetailing(s).rules, "lateral-support") as { ok: boolean; message: string };
+    const r = checkDetailing(s).rules.find((x) => x.rule === "lateral-support")!;
     expect(r.ok).toBe(false);
     expect(r.message).toMatch(/inside the perimeter/);
   });
