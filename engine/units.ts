@@ -249,7 +249,16 @@ export function convertCheckOutput(o: CheckOutput, to: UnitSystem): CheckOutput 
       steelLb: mass(o.quantities.steelLb),
       formFt2: area(o.quantities.formFt2),
     },
-    assumptions: { ...o.assumptions, units: to },
+    assumptions: {
+      ...o.assumptions,
+      units: to,
+      notes: [
+        ...(o.assumptions.notes ?? []),
+        ...(to === "SI"
+          ? ["SI output: quantities.concreteYd3 is in m³, steelLb in kg and formFt2 in m² (field names kept from the contract); detailing lengths in mm"]
+          : []),
+      ],
+    },
   };
   if (o.cost !== undefined) {
     out.cost = {
