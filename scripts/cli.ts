@@ -9,6 +9,7 @@ const commands: Record<string, () => Promise<{ command: CliCommand }>> = {
   check: () => import("../lib/cli/check"),
   diagram: () => import("../lib/cli/diagram"),
   k: () => import("../lib/cli/k"),
+  optimize: () => import("../lib/cli/optimize"),
 };
 
 async function main(argv: string[]): Promise<number> {

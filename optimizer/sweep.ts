@@ -1,0 +1,195 @@
+/**
+ * The pruned search: visit candidates in order of cost and evaluate only what could still
+ * reach a front, using bounds that are proofs, never estimates.
+ *
+ * Why this is identical to an exhaustive search. Two staircases hold points of candidates
+ * that were evaluated in full and pass: (cents, utilization units) and (cents, carbon units).
+ * A candidate is left unevaluated, or its evaluation stopped early, only when
+ *  - it fails: a load case exceeds 1.0 (the member fails when any case fails), or
+ *    Pu > φPn,max for some case (the engine fails that case before anything else), or
+ *  - it can join neither front: a known passing candidate dominates it on (cost, carbon) —
+ *    both known exactly before any check — AND one dominates it on (cost, utilization) for a
+ *    lower bound of its utilization. Lower bounds used: max Pu/φPn,max over the cases (the
+ *    engine's case utilization is never below its axial term) and the largest case
+ *    utilization evaluated so far (the member utilization is the largest case utilization).
+ * A front member is dominated by no passing candidate at all, so neither test can drop it;
+ * every front member is therefore evaluated in full, and the fronts selected from the fully
+ * evaluated candidates equal the fronts over the whole space. The order of visiting and which
+ * known points are available when (other threads) change only how much is skipped.
+ *
+ * No monotonicity is assumed: with the code's φ (Table 21.2.2), adding bars can lower φMn at
+ * a given Pu (tension steel deepens the neutral axis and moves a section from tension-
+ * controlled toward compression-controlled), so "more bars never lower capacity" is false
+ * and a bisection on bar count would not be exact.
+ */
+import { caseUtilization, prepareMember, resolveSection } from "../engine";
+import type { LoadCase, MemberInput } from "../engine/types";
+import { Staircase, toUtilUnits } from "./pareto-front";
+import { phiPnMaxOf, sectionInputOf, type CandidateTable, type Family, type SearchProblem } from "./search-space";
+
+/** Pass tolerance of the engine's check (utilization ≤ 1 + 1e-9 passes). */
+const PASS_LIMIT = 1 + 1e-9;
+
+/** Where known passing points come from and go to (local, or shared between threads). */
+export interface BoundExchange {
+  /** newly known passing points of other workers, merged into the local staircases */
+  pull(util: Staircase, carbon: Staircase): void;
+  /** a new passing point found here */
+  push(cents: number, utilUnits: number, carbonUnits: number): void;
+  /** true once the search is cancelled */
+  cancelled(): boolean;
+}
+
+export interface EvaluatedCandidate {
+  /** index into the candidate table */
+  index: number;
+  utilization: number;
+  /** name of the governing load case */
+  governing: string;
+}
+
+export interface RegionTally {
+  /** candidates that failed, by the index of the load case that failed them */
+  failedBy: number[];
+  /** candidates found to pass */
+  passing: number;
+  /** candidates left unevaluated or stopped because they could not reach a front */
+  dominated: number;
+  /** candidates failed by the axial check before any evaluation */
+  axialFails: number;
+}
+
+export interface SweepResult {
+  /** fully evaluated passing candidates */
+  passing: EvaluatedCandidate[];
+  /** member evaluations over every load case */
+  fullChecks: number;
+  /** single load-case evaluations, all told */
+  caseChecks: number;
+  /** candidates visited */
+  visited: number;
+  /** per region key (see regionOf) */
+  regions: Record<string, RegionTally>;
+}
+
+/** Region of a family for infeasibility reasons: shape and confinement. */
+export function regionOf(fam: Family): string {
+  return fam.shape === "rect" ? "rect" : fam.confinement === "spiral" ? "circle-spiral" : "circle";
+}
+
+function newTally(nCases: number): RegionTally {
+  return { failedBy: new Array<number>(nCases).fill(0), passing: 0, dominated: 0, axialFails: 0 };
+}
+
+export interface SweepOptions {
+  /** positions [from, to) in table.order to visit */
+  from: number;
+  to: number;
+  exchange: BoundExchange;
+  /** visit every candidate in full (the exhaustive search) */
+  exhaustive?: boolean;
+  /** called every few hundred candidates with the number visited since the last call */
+  onTick?: (visited: number, kept: number) => void;
+}
+
+/**
+ * Runs the sweep over one slice of the cost order. Pure apart from the exchange: the same
+ * slice and the same known points give the same result.
+ */
+export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: SweepOptions): SweepResult {
+  const loads = problem.loads;
+  const nCases = loads.length;
+  const util = new Staircase();
+  const carb = new Staircase();
+  const lastDeciding = new Int32Array(table.families.length);
+  const passing: EvaluatedCandidate[] = [];
+  const regions: Record<string, RegionTally> = {};
+  let fullChecks = 0;
+  let caseChecks = 0;
+  let visited = 0;
+  let sinceTick = 0;
+  const maxPu = loads.reduce((m, l) => Math.max(m, l.Pu), -Infinity);
+  const members = problem.braceLevels.map((n): MemberInput => ({ ...problem.member, braceLevels: n }));
+  for (let pos = opts.from; pos < opts.to; pos++) {
+    if ((pos - opts.from) % 64 === 0) {
+      if (opts.exchange.cancelled()) break;
+      opts.exchange.pull(util, carb);
+    }
+    const i = table.order[pos] as number;
+    visited++;
+    if (opts.onTick && ++sinceTick >= 256) {
+      opts.onTick(sinceTick, passing.length);
+      sinceTick = 0;
+    }
+    const famIndex = table.family[i] as number;
+    const fam = table.families[famIndex] as Family;
+    const region = regionOf(fam);
+    const tally = (regions[region] ??= newTally(nCases));
+    const li = table.layout[i] as number;
+    const fi = table.fc[i] as number;
+    const fc = (problem.fcs[fi] as { v: number }).v;
+    const cents = table.cents[i] as number;
+    const cu = table.carbonUnits[i] as number;
+    const exhaustive = opts.exhaustive === true;
+    // Table 22.4.2.1: the engine fails a case whose Pu exceeds φPn,max before anything else
+    const phiPnMax = phiPnMaxOf(fam, li, fc);
+    if (!exhaustive && !(maxPu <= phiPnMax)) {
+      tally.axialFails++;
+      continue;
+    }
+    const carbonDominated = !exhaustive && carb.dominatesAll(cents, cu);
+    if (carbonDominated && util.dominatesAll(cents, toUtilUnits(maxPu / phiPnMax))) {
+      tally.dominated++;
+      continue;
+    }
+    const section = resolveSection(sectionInputOf(problem, { ...fam, fy: fam.fy.v }, fam.layouts[li] as [number, number], fc));
+    const prep = prepareMember(section, members[table.brace[i] as number] as MemberInput, problem.options);
+    const first = lastDeciding[famIndex] as number;
+    let worst = -Infinity;
+    let governing = -1;
+    let outcome: "pass" | "fail" | "dominated" = "pass";
+    for (let j = 0; j < nCases; j++) {
+      const ci = j === 0 ? first : j <= first ? j - 1 : j;
+      const u = caseUtilization(prep, loads[ci] as LoadCase);
+      caseChecks++;
+      if (u > worst) {
+        worst = u;
+        governing = ci;
+      }
+      if (u > PASS_LIMIT || Number.isNaN(u)) {
+        if (exhaustive) {
+          if (outcome === "pass") tally.failedBy[ci] = (tally.failedBy[ci] ?? 0) + 1;
+          outcome = "fail";
+          continue;
+        }
+        outcome = "fail";
+        lastDeciding[famIndex] = ci;
+        tally.failedBy[ci] = (tally.failedBy[ci] ?? 0) + 1;
+        break;
+      }
+      if (carbonDominated && util.dominatesAll(cents, toUtilUnits(worst))) {
+        outcome = "dominated";
+        lastDeciding[famIndex] = governing;
+        tally.dominated++;
+        break;
+      }
+    }
+    if (exhaustive) fullChecks++;
+    if (outcome !== "pass") continue;
+    if (!exhaustive) fullChecks++;
+    lastDeciding[famIndex] = governing;
+    tally.passing++;
+    const uu = toUtilUnits(worst);
+    util.add(cents, uu);
+    carb.add(cents, cu);
+    opts.exchange.push(cents, uu, cu);
+    passing.push({ index: i, utilization: worst, governing: (loads[governing] as LoadCase).name });
+  }
+  if (opts.onTick && sinceTick > 0) opts.onTick(sinceTick, passing.length);
+  return { passing, fullChecks, caseChecks, visited, regions };
+}
+
+/** An exchange for a single in-process sweep (nothing to share, never cancelled). */
+export function localExchange(signal?: AbortSignal): BoundExchange {
+  return { pull() {}, push() {}, cancelled: () => signal?.aborted === true };
+}
