@@ -32,7 +32,9 @@ function wrapAngle(a: number): number {
  * φPn(c) = Pu; α is iterated (secant, then Brent once bracketed, |Δθ| ≤ 1e-9 rad)
  * until the nominal moment vector (Mnx, Mny) points along θ. At the final α every
  * root in c is examined and the smallest capacity governs (§7.6). The capacity is the
- * magnitude φ √(Mnx² + Mny²).
+ * magnitude φ √(Mnx² + Mny²). If the local iteration fails, α is scanned round the full
+ * circle and the smallest capacity among the solutions governs; a direction no neutral
+ * axis can produce at this Pu has zero capacity.
  *
  * For a symmetric section θ = 0 and θ = π/2 give exactly phiMnAt about x and about y.
  * Circles: see circleCapacityAt for the project's orientation rule (§7.5).
@@ -71,17 +73,20 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   let a = Math.atan2(k.tanRatio * Math.sin(theta), Math.cos(theta));
   let fa = errAt(a);
   let alpha = a;
-  if (Math.abs(fa) > tol && !st.degenerate) {
+  let found = Math.abs(fa) <= tol || st.degenerate;
+  if (!found) {
     // first step with the slope dθ/dα seen last time on this section (1 for a circle)
     let b = a + clampStep(-fa / k.alphaSlope);
     let fb = errAt(b);
-    let found = Math.abs(fb) <= tol;
+    found = Math.abs(fb) <= tol;
     alpha = b;
     for (let iter = 0; iter < 40 && !found && !st.degenerate; iter++) {
       if (fa < 0 !== fb < 0 && Math.abs(b - a) < Math.PI) {
         // bracketed: Brent on α (the error is continuous away from the ±π wrap)
         alpha = findRoot(errAt, a, b, fa, fb, 1e-13, tol);
-        found = true;
+        // a sign change can also be the ±π wrap of the error (a direction the contour
+        // does not reach): accept only a genuine root
+        found = Math.abs(errAt(alpha)) <= 1e-6;
         break;
       }
       const slope = (fb - fa) / (b - a);
@@ -96,20 +101,56 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
       if (Math.abs(fb) <= tol) found = true;
     }
   }
+  if (!found && !st.degenerate) return scanAngles(k, Pu, theta, tol);
   const sc = Math.sin(theta) * Math.cos(theta);
   if (Math.abs(sc) > 1e-3 && !st.degenerate) {
     const ratio = Math.tan(alpha) / Math.tan(theta);
     if (ratio > 0.05 && ratio < 20) k.tanRatio = ratio;
   }
+  return capacityAtAlpha(k, Pu, theta, alpha, st.lastAlpha === alpha ? st.guess : Number.NaN);
+}
+
+/** Final step at a converged α: every root in c, the smallest capacity along θ governs. */
+function capacityAtAlpha(k: Kernel, Pu: number, theta: number, alpha: number, known: number): BiaxialCapacity {
   const dir = k.scratchDir;
-  // final α: every root in c, the smallest capacity along θ governs
   setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
-  const known = st.lastAlpha === alpha ? st.guess : Number.NaN;
   solveMulti(k, dir, Pu, Math.cos(theta), Math.sin(theta), root, known);
   if (Number.isNaN(root.c)) solveSingle(k, dir, Pu, 0, root);
   const Mn = Math.hypot(root.Mx, root.My);
   const phi = phiOf(root.epsT, k.epsTy, k.phiC);
   return { phiMn: phi * Mn, Mn, phi, c: root.c, epsT: root.epsT, alpha: wrapAngle(alpha) };
+}
+
+/**
+ * Fallback when the local iteration does not converge: scan α round the full circle,
+ * solve every bracket of the direction error, and keep the smallest capacity (§7.6,
+ * several angles). When no neutral-axis angle gives a moment along θ at this Pu (the
+ * capacity contour does not enclose that direction, e.g. a strongly unsymmetric section
+ * near φPn,max), the capacity in that direction is zero.
+ */
+function scanAngles(k: Kernel, Pu: number, theta: number, tol: number): BiaxialCapacity {
+  const steps = 72;
+  let best: BiaxialCapacity | null = null;
+  let pa = theta - Math.PI;
+  st.guess = 0;
+  let pe = errAt(pa);
+  for (let i = 1; i <= steps; i++) {
+    const ca = theta - Math.PI + (2 * Math.PI * i) / steps;
+    const ce = errAt(ca);
+    if (pe < 0 !== ce < 0 && Math.abs(ce - pe) < Math.PI) {
+      const alpha = findRoot(errAt, pa, ca, pe, ce, 1e-13, tol);
+      if (Math.abs(errAt(alpha)) <= 1e-6) {
+        const cap = capacityAtAlpha(k, Pu, theta, alpha, Number.NaN);
+        if (best === null || cap.phiMn < best.phiMn) best = cap;
+      }
+      st.guess = 0;
+      pe = errAt(ca);
+    } else pe = ce;
+    pa = ca;
+  }
+  if (best !== null) return best;
+  const none = capacityAtAlpha(k, Pu, theta, theta, Number.NaN);
+  return { ...none, phiMn: 0, Mn: 0 };
 }
 
 function clampStep(step: number): number {

@@ -103,6 +103,34 @@ describe("phiMnAtAngle — rectangular sections", () => {
       expect(rel(phiMnAtAngle(U, Pu, 35 * deg)?.phiMn ?? 0, contourCapacity(U, Pu, 35 * deg))).toBeLessThan(2e-3);
     }
   });
+  it("gives zero in a direction no neutral axis reaches (strongly unsymmetric section under high axial load)", () => {
+    // 2 #18 near the top, one #3 at the bottom: at Pu = 300 kip every neutral axis leaves a
+    // positive Mx (the plastic centroid sits 2 in above the centroid), so −Mx is unreachable
+    const W = resolveSection({
+      shape: "rect", b: 12, h: 12, fc: 3, fy: 80, confinement: "tied", cover: 1,
+      bars: [{ x: -3.5, y: 3.5, size: "#18" }, { x: 3.5, y: 3.5, size: "#18" }, { x: 0, y: -4.5, size: "#3" }],
+    });
+    expect(phiMnAt(W, "x", 300, -1)?.phiMn).toBe(0);
+    expect(phiMnAtAngle(W, 300, Math.PI)?.phiMn).toBe(0);
+    expect(phiMnAtAngle(W, 300, 0.9 * Math.PI)?.phiMn).toBe(0);
+    for (let i = 0; i <= 36; i++) {
+      const alpha = (i * 2 * Math.PI) / 36;
+      let lo = 1e-9;
+      let hi = 200;
+      for (let j = 0; j < 80; j++) {
+        const m = (lo + hi) / 2;
+        const f = sectionForcesAt(W, alpha, m);
+        if (f.phi * f.Pn < 300) lo = m;
+        else hi = m;
+      }
+      expect(sectionForcesAt(W, alpha, lo).Mnx).toBeGreaterThan(0); // confirms the premise
+    }
+    const ok = phiMnAtAngle(W, 300, 0.2);
+    if (ok === null) throw new Error("expected a capacity");
+    const f = sectionForcesAt(W, ok.alpha, ok.c);
+    expect(Math.atan2(f.Mny, f.Mnx)).toBeCloseTo(0.2, 6);
+    expect(rel(ok.phiMn, contourCapacity(W, 300, 0.2))).toBeLessThan(2e-3);
+  });
   it("is null outside −0.9 Pnt … φPn,max and zero at pure tension", () => {
     expect(phiMnAtAngle(S, S.phiPnMax * 1.0001, 0.3)).toBeNull();
     expect(phiMnAtAngle(S, -0.9 * S.Pnt * 1.0001, 0.3)).toBeNull();
