@@ -123,9 +123,12 @@ function buildCase(prep: PreparedMember, load: LoadCase, s: CaseScratch): CaseRe
   const Pu = load.Pu;
   const util = s.utilization;
   const seg = s.segment;
-  // re-run the governing segment so the chains hold its values
-  runAxis(prep, prep.x, prep.swayX, load.Mx, Pu, load.betaDns, seg, s.seg, s.chainX);
-  runAxis(prep, prep.y, prep.swayY, load.My, Pu, load.betaDns, seg, s.seg, s.chainY);
+  // the chains must hold the governing segment's values (re-run when another was evaluated last)
+  if (s.chainSegment !== seg) {
+    runAxis(prep, prep.x, prep.swayX, load.Mx, Pu, load.betaDns, seg, s.seg, s.chainX);
+    runAxis(prep, prep.y, prep.swayY, load.My, Pu, load.betaDns, seg, s.seg, s.chainY);
+    s.chainSegment = seg;
+  }
   const cx = s.chainX;
   const cy = s.chainY;
   const vx = s.variant === "raise-x" ? cx.raised : cx.given;

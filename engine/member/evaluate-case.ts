@@ -48,6 +48,8 @@ export interface CaseScratch {
   vAxis: Axis | null;
   vBiCap: number;
   vTheta: number;
+  /** segment whose values the chains hold (−1: none for this case) */
+  chainSegment: number;
   /** one-entry cache of the last biaxial capacity: Mcy/Mcx and Pu */
   vThetaKey: number;
   lastAngleCap: number;
@@ -77,6 +79,7 @@ export function createCaseScratch(): CaseScratch {
     vTheta: NaN,
     vThetaKey: NaN,
     lastAngleCap: NaN,
+    chainSegment: -1,
   };
 }
 
@@ -257,6 +260,7 @@ export function evaluateCase(prep: PreparedMember, load: LoadCase, s: CaseScratc
   s.biaxialCap = NaN;
   s.theta = NaN;
   s.swayError = null;
+  s.chainSegment = -1;
   // Table 22.4.2.1: Pu may not exceed φPn,max; 22.4.3.1: nor tension beyond φ Pnt
   if (!(Pu <= sec.phiPnMax) || !(Pu >= -0.9 * sec.Pnt)) {
     s.failure = "axial";
@@ -270,6 +274,7 @@ export function evaluateCase(prep: PreparedMember, load: LoadCase, s: CaseScratc
   for (let seg = 0; seg < prep.segments; seg++) {
     const okX = runAxis(prep, prep.x, prep.swayX, load.Mx, Pu, load.betaDns, seg, s.seg, s.chainX);
     const okY = runAxis(prep, prep.y, prep.swayY, load.My, Pu, load.betaDns, seg, s.seg, s.chainY);
+    s.chainSegment = seg;
     if (!okX || !okY) {
       const st = !okX ? prep.swayX : prep.swayY;
       s.swayError = st === null ? null : st.error;

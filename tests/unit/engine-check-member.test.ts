@@ -296,6 +296,8 @@ describe("checkMember: pass/fail, governing, detailing, errors", () => {
     expect(() => checkMember({ section: RECT, member: BRACED, loads: [L({ Mx: { M1: 900, M2: 100, curvature: "single" } })] })).toThrow(/M1 must not exceed M2/);
     expect(() => checkMember({ section: RECT, member: { lu: 200, kx: 1.2, ky: 1.2, braced: false, braceLevels: 1 }, loads: [L()] })).toThrow(RangeError);
     expect(() => checkMember({ section: RECT, member: BRACED, loads: [] })).toThrow(RangeError);
+    expect(() => checkMember({ section: RECT, member: BRACED, loads: [L({ Pu: Number.NaN })] })).toThrow(/loads\.0\.Pu/);
+    expect(() => checkMember({ section: { ...RECT, fy: 90 }, member: BRACED, loads: [L()] })).toThrow(/80 ksi/);
     expect(() => checkMember({ section: RECT, member: BRACED, loads: [L({ Pu: 5000 })] })).not.toThrow();
   });
 });
