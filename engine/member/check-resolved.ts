@@ -24,8 +24,9 @@ export const CODE_EDITION = "ACI 318-19" as const;
 
 /** The caution carried by every result (product.md, "Cautions shown in the product"). */
 export const CAUTION =
-  "Results support, and never replace, the judgement of a licensed engineer; local building codes and the engineer of record govern. " +
-  "Checked to ACI 318-19 with the assumptions listed (EI option, k, braced or sway, βdns).";
+  "Caryatid supports, and never replaces, the judgement of a licensed engineer. Local building codes and the engineer of record govern. Checks follow " +
+  CODE_EDITION +
+  "; every result states the assumptions (EI option, k, braced or sway, βdns) that produced it.";
 
 /** Tolerance on utilization = 1.0 so round-off does not flip a pass (1e-9 relative). */
 const PASS_TOL = 1e-9;

@@ -13,3 +13,4 @@ export { computeSegmentEndMoments } from "./compute-segment-end-moments";
 export type { SegmentEndMoments } from "./compute-segment-end-moments";
 export { runMagnifierChain, createMagnifierChain } from "./run-magnifier-chain";
 export type { AxisConstants, ChainVariant, MagnifierChain } from "./run-magnifier-chain";
+export { MAGNIFIER_CLAUSES } from "./magnifier-clauses";
