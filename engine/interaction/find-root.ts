@@ -1,6 +1,15 @@
 /**
- * Brent's method for a continuous function with a sign change on [a, b] (internal).
- * Returns x with |f(x)| ≤ ftol or the bracket narrower than xtol.
+ * Brent's method (inverse quadratic interpolation and secant steps safeguarded by
+ * bisection) for a continuous function with a sign change on [lo, hi].
+ *
+ * @param f the function
+ * @param lo left end of the bracket; flo = f(lo)
+ * @param hi right end; fhi = f(hi), of opposite sign to flo
+ * @param xtol bracket width at which to stop
+ * @param ftol |f| at which to stop
+ * @returns x with |f(x)| ≤ ftol or within xtol of a sign change
+ * @internal
+ * @example findRoot((x) => x * x - 2, 0, 2, -2, 2, 1e-14, 1e-14) // ≈ √2
  */
 export function findRoot(
   f: (x: number) => number,

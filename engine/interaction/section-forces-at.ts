@@ -45,7 +45,7 @@ export function sectionForcesAt(section: ResolvedSection, angleRad: number, c: n
   if (typeof c !== "number" || Number.isNaN(c) || c < 0) throw new RangeError(`c must be ≥ 0 (got ${String(c)})`);
   const k = kernelOf(section);
   const dir: Direction = {
-    ux: 0, uy: 0, tmax: 0, depth: 0, d: new Float64Array(k.n), dt: 0, cFull: 0, cP0: 0,
+    ux: 0, uy: 0, tmax: 0, depth: 0, d: new Array<number>(k.n).fill(0), dt: 0, cFull: 0, cP0: 0,
   };
   setDirection(k, snapUnit(Math.sin(angleRad)), snapUnit(Math.cos(angleRad)), dir);
   const out = new Float64Array(4);

@@ -12,8 +12,8 @@
  * Mx > 0); α = π/2 compresses the +x face (My > 0). Moments are about the centroidal
  * axes: Mx = Σ F·y, My = Σ F·x.
  *
- * Per-section typed arrays and per-direction scans live in a WeakMap keyed by the
- * ResolvedSection object, which is therefore treated as immutable once used.
+ * Per-section arrays and per-direction scans are cached on the ResolvedSection object
+ * (non-enumerable symbol property), which is therefore treated as immutable once used.
  */
 import { EPS_CU } from "../materials";
 import { rotateSection } from "../section/rotate-section";
@@ -34,7 +34,7 @@ export interface Direction {
   /** section depth in this direction, in */
   depth: number;
   /** depth of each bar below the extreme compression fibre, in */
-  d: Float64Array;
+  d: number[];
   /** depth of the extreme tension bar, in */
   dt: number;
   /** c at which the block first covers the whole depth */
@@ -51,18 +51,18 @@ export interface Direction {
 export interface Scan {
   dir: Direction;
   m: number;
-  cL: Float64Array;
-  cR: Float64Array;
-  vL: Float64Array;
-  vR: Float64Array;
+  cL: number[];
+  cR: number[];
+  vL: number[];
+  vR: number[];
 }
 
 export interface Kernel {
   section: ResolvedSection;
   n: number;
-  bx: Float64Array;
-  by: Float64Array;
-  ba: Float64Array;
+  bx: number[];
+  by: number[];
+  ba: number[];
   circle: boolean;
   halfB: number;
   halfH: number;
@@ -96,9 +96,17 @@ export interface Kernel {
   scratchDir: Direction;
 }
 
-const cache = new WeakMap<ResolvedSection, Kernel>();
+/**
+ * The kernel is kept on the section itself under a non-enumerable symbol: invisible to
+ * JSON, spreading and equality checks, and cheaper for the garbage collector than a
+ * WeakMap when a search creates many short-lived sections.
+ */
+const KERNEL = Symbol("caryatid.interactionKernel");
+type WithKernel = ResolvedSection & { [KERNEL]?: Kernel };
+/** fallback for frozen sections, which cannot take the property */
+const frozenCache = new WeakMap<ResolvedSection, Kernel>();
 
-function isMirrored(bx: Float64Array, by: Float64Array, ba: Float64Array, sx: number, sy: number): boolean {
+function isMirrored(bx: number[], by: number[], ba: number[], sx: number, sy: number): boolean {
   const n = bx.length;
   const tol = 1e-6;
   for (let i = 0; i < n; i++) {
@@ -122,21 +130,23 @@ function isMirrored(bx: Float64Array, by: Float64Array, ba: Float64Array, sx: nu
 
 /** Kernel of a resolved section (built once, cached). */
 export function kernelOf(section: ResolvedSection): Kernel {
-  const hit = cache.get(section);
-  if (hit !== undefined) return hit;
+  const hit = (section as WithKernel)[KERNEL] ?? frozenCache.get(section);
+  if (hit !== undefined && hit.section === section) return hit;
   if (section === null || typeof section !== "object" || !Array.isArray(section.bars)) {
     throw new TypeError("section must be a ResolvedSection (use resolveSection)");
   }
   const n = section.bars.length;
   if (n < 1) throw new RangeError("section has no bars");
-  const bx = new Float64Array(n);
-  const by = new Float64Array(n);
-  const ba = new Float64Array(n);
-  section.bars.forEach((bar, i) => {
-    bx[i] = bar.x;
-    by[i] = bar.y;
-    ba[i] = bar.area;
-  });
+  // plain arrays of doubles: V8 keeps them unboxed, and they allocate far more cheaply
+  // than typed arrays (a kernel is built per candidate section in a search)
+  const bx: number[] = [];
+  const by: number[] = [];
+  const ba: number[] = [];
+  for (const bar of section.bars) {
+    bx.push(bar.x);
+    by.push(bar.y);
+    ba.push(bar.area);
+  }
   const k: Kernel = {
     section,
     n,
@@ -164,10 +174,12 @@ export function kernelOf(section: ResolvedSection): Kernel {
     alphaSlope: 1,
     tanRatio: section.Igy > 0 ? section.Igx / section.Igy : 1,
     scratchDir: {
-      ux: 0, uy: 1, tmax: 0, depth: 0, d: new Float64Array(n), dt: 0, cFull: 0, cP0: 0,
+      ux: 0, uy: 1, tmax: 0, depth: 0, d: new Array<number>(n).fill(0), dt: 0, cFull: 0, cP0: 0,
     },
   };
-  cache.set(section, k);
+  if (Object.isExtensible(section)) {
+    Object.defineProperty(section, KERNEL, { value: k, enumerable: false, configurable: true, writable: true });
+  } else frozenCache.set(section, k);
   return k;
 }
 
@@ -203,11 +215,16 @@ export function setDirection(k: Kernel, ux: number, uy: number, dir: Direction):
 const UNI_UX = [0, 1, 0, -1] as const;
 const UNI_UY = [1, 0, -1, 0] as const;
 
+/**
+ * Cached uniaxial direction of a kernel: 0 compresses +y (+Mx), 1 +x (+My), 2 −y, 3 −x.
+ * @internal
+ * @example uniDirection(kernelOf(section), 0).cFull // h / β1
+ */
 export function uniDirection(k: Kernel, idx: 0 | 1 | 2 | 3): Direction {
   let dir = k.uni[idx];
   if (dir === undefined) {
     dir = setDirection(k, UNI_UX[idx], UNI_UY[idx], {
-      ux: 0, uy: 0, tmax: 0, depth: 0, d: new Float64Array(k.n), dt: 0, cFull: 0, cP0: 0,
+      ux: 0, uy: 0, tmax: 0, depth: 0, d: new Array<number>(k.n).fill(0), dt: 0, cFull: 0, cP0: 0,
     });
     k.uni[idx] = dir;
   }
@@ -311,49 +328,81 @@ const SCAN_INTERVALS = 24;
 
 /** Build the φPn scan of a direction (see {@link Scan}). */
 export function buildScan(k: Kernel, dir: Direction): Scan {
-  const pts: { c: number; jump: boolean }[] = [];
-  pts.push({ c: 0, jump: false });
-  for (let i = 1; i <= SCAN_INTERVALS; i++) pts.push({ c: (dir.cFull * i) / SCAN_INTERVALS, jump: false });
+  // grid depths; a step (displaced concrete) is flagged by a positive area
+  const cs: number[] = [0];
+  const as: number[] = [0];
+  for (let i = 1; i <= SCAN_INTERVALS; i++) {
+    cs.push((dir.cFull * i) / SCAN_INTERVALS);
+    as.push(0);
+  }
   if (dir.cP0 > dir.cFull) {
     const r = dir.cP0 / dir.cFull;
-    for (let i = 1; i <= 3; i++) pts.push({ c: dir.cFull * Math.pow(r, i / 3), jump: false });
+    for (let i = 1; i <= 3; i++) {
+      cs.push(dir.cFull * Math.pow(r, i / 3));
+      as.push(0);
+    }
   }
   if (dir.dt > 0) {
-    pts.push({ c: (EPS_CU * dir.dt) / (EPS_CU + k.epsTy), jump: false });
-    pts.push({ c: (EPS_CU * dir.dt) / (2 * EPS_CU + k.epsTy), jump: false });
+    cs.push((EPS_CU * dir.dt) / (EPS_CU + k.epsTy), (EPS_CU * dir.dt) / (2 * EPS_CU + k.epsTy));
+    as.push(0, 0);
   }
   for (let i = 0; i < k.n; i++) {
     const di = dir.d[i] as number;
-    if (di > 0 && di < dir.depth) pts.push({ c: di / k.beta1, jump: true });
-  }
-  pts.sort((p, q) => p.c - q.c);
-  // merge coincident points (a jump wins)
-  const merged: { c: number; jump: boolean }[] = [];
-  for (const p of pts) {
-    const last = merged[merged.length - 1];
-    if (last !== undefined && Math.abs(p.c - last.c) <= 1e-9 * dir.cP0) {
-      last.jump = last.jump || p.jump;
-    } else merged.push({ ...p });
-  }
-  const m = merged.length;
-  const cL = new Float64Array(m);
-  const cR = new Float64Array(m);
-  const vL = new Float64Array(m);
-  const vR = new Float64Array(m);
-  merged.forEach((p, i) => {
-    if (p.jump) {
-      cL[i] = p.c * (1 - 1e-10);
-      cR[i] = p.c * (1 + 1e-10);
-    } else {
-      cL[i] = p.c;
-      cR[i] = p.c;
+    if (di > 0 && di < dir.depth) {
+      cs.push(di / k.beta1);
+      as.push(k.ba[i] as number);
     }
-    vL[i] = phiPnAt(k, dir, cL[i] as number);
-    vR[i] = p.jump ? phiPnAt(k, dir, cR[i] as number) : (vL[i] as number);
-  });
+  }
+  // insertion sort (a few dozen entries), merging coincident depths (step areas add)
+  const tol = 1e-9 * dir.cP0;
+  const sc: number[] = [];
+  const sa: number[] = [];
+  for (let i = 0; i < cs.length; i++) {
+    const c = cs[i] as number;
+    const area = as[i] as number;
+    let pos = sc.length;
+    while (pos > 0 && (sc[pos - 1] as number) > c + tol) pos--;
+    if (pos > 0 && Math.abs((sc[pos - 1] as number) - c) <= tol) {
+      sa[pos - 1] = (sa[pos - 1] as number) + area;
+    } else {
+      sc.splice(pos, 0, c);
+      sa.splice(pos, 0, area);
+    }
+  }
+  const m = sc.length;
+  const cL: number[] = [];
+  const cR: number[] = [];
+  const vL: number[] = [];
+  const vR: number[] = [];
+  for (let i = 0; i < m; i++) {
+    const c = sc[i] as number;
+    const area = sa[i] as number;
+    if (area > 0) {
+      // left limit evaluated just below the step; the right limit differs only by the
+      // displaced concrete of the bars entering the block (φ and all else are continuous)
+      const lo = c * (1 - 1e-10);
+      evaluate(k, dir, lo, evalOut);
+      const phi = phiOf(evalOut[3] as number, k.epsTy, k.phiC);
+      cL.push(lo);
+      cR.push(c * (1 + 1e-10));
+      vL.push(phi * (evalOut[0] as number));
+      vR.push(phi * ((evalOut[0] as number) - k.k85 * area));
+    } else {
+      const v = phiPnAt(k, dir, c);
+      cL.push(c);
+      cR.push(c);
+      vL.push(v);
+      vR.push(v);
+    }
+  }
   return { dir, m, cL, cR, vL, vR };
 }
 
+/**
+ * Cached φPn scan of a uniaxial direction (built on first use).
+ * @internal
+ * @example uniScan(kernelOf(section), 0).m // number of grid points
+ */
 export function uniScan(k: Kernel, idx: 0 | 1 | 2 | 3): Scan {
   let s = k.scans[idx];
   if (s === undefined) {
@@ -628,6 +677,7 @@ export function solveMulti(
   return res;
 }
 
+/** A fresh root record (reused by callers to avoid allocation). @internal */
 export function newRoot(): RootResult {
   return { c: Number.NaN, Pn: 0, Mx: 0, My: 0, epsT: 0, phi: 0 };
 }
