@@ -1,4 +1,5 @@
 import type { DetailingResult, ResolvedSection } from "../types";
+import { formatLength } from "./format-length";
 
 /**
  * Smallest clear distance between any two longitudinal bars, in (centre distance less
@@ -30,7 +31,7 @@ export function computeMinClearSpacing(section: ResolvedSection): number {
  * @param dagg nominal maximum aggregate size, in (default 0.75, common practice)
  * @example checkClearSpacing(sec, 0.75) // { rule: "clear-spacing", value: 4.6, limit: 1.5, ... }
  */
-export function checkClearSpacing(section: ResolvedSection, dagg = 0.75): DetailingResult {
+export function checkClearSpacing(section: ResolvedSection, dagg = 0.75, units: "US" | "SI" = "US"): DetailingResult {
   let dbMax = 0;
   for (const b of section.bars) if (b.db > dbMax) dbMax = b.db;
   const limit = Math.max(1.5, 1.5 * dbMax, (4 / 3) * dagg);
@@ -39,7 +40,7 @@ export function checkClearSpacing(section: ResolvedSection, dagg = 0.75): Detail
   const ok = !Number.isFinite(min) || min >= limit - 1e-9;
   const r: DetailingResult = { rule: "clear-spacing", clause: "25.2.3", ok, value, limit, unit: "in" };
   if (!ok) {
-    r.message = `clear spacing between bars ${value.toFixed(2)} in is less than ${limit.toFixed(2)} in = max(1.5 in, 1.5 db, 4/3 dagg): use fewer or smaller bars, or a larger section`;
+    r.message = `clear spacing between bars ${formatLength(value, units)} is less than ${formatLength(limit, units)} = max(1.5 in, 1.5 db, 4/3 dagg): use fewer or smaller bars, or a larger section`;
   }
   return r;
 }

@@ -1,4 +1,5 @@
 import type { CheckOptions, DetailingResult, ResolvedSection } from "../types";
+import { formatLength } from "./format-length";
 
 /**
  * Minimum specified cover to the ties or spiral, in (Table 20.5.1.3.1): 1.5 in not exposed
@@ -21,12 +22,16 @@ export function minimumCover(exposure: NonNullable<CheckOptions["exposure"]>, db
  *
  * @example checkCover(sec, "interior") // { rule: "cover", value: 1.5, limit: 1.5, ok: true, ... }
  */
-export function checkCover(section: ResolvedSection, exposure: NonNullable<CheckOptions["exposure"]> = "interior"): DetailingResult {
+export function checkCover(
+  section: ResolvedSection,
+  exposure: NonNullable<CheckOptions["exposure"]> = "interior",
+  units: "US" | "SI" = "US",
+): DetailingResult {
   let dbMax = 0;
   for (const b of section.bars) if (b.db > dbMax) dbMax = b.db;
   const limit = minimumCover(exposure, dbMax);
   const ok = section.cover >= limit - 1e-9;
   const r: DetailingResult = { rule: "cover", clause: "20.5.1.3.1", ok, value: section.cover, limit, unit: "in" };
-  if (!ok) r.message = `clear cover ${section.cover} in is less than ${limit} in required for ${exposure} exposure`;
+  if (!ok) r.message = `clear cover ${formatLength(section.cover, units)} is less than ${formatLength(limit, units)} required for ${exposure} exposure`;
   return r;
 }

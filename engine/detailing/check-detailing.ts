@@ -13,7 +13,8 @@ import { checkLateralSupport, countCrossTies, type CrossTieCount } from "./count
  * (10.7.3.1), clear-spacing (25.2.3), cover (Table 20.5.1.3.1), tie-size (25.7.2.2) and
  * tie-spacing (25.7.2.1) for tied sections, lateral-support (25.7.2.3), and for spirals
  * spiral-ratio (25.7.3.3), spiral-pitch-max/-min (25.7.3.1), spiral-size (25.7.3.2).
- * Lengths in `value`/`limit` are in inches (`unit: "in"`).
+ * Lengths in `value`/`limit` are in inches (`unit: "in"`); messages quote lengths in
+ * `options.displayUnits`.
  *
  * @param section resolved section
  * @param options dagg (default 0.75 in), rhoMax, exposure (default interior)
@@ -27,7 +28,7 @@ export function checkDetailing(
 ): { rules: DetailingResult[]; crossTies: CrossTieCount } {
   // A resolved section is immutable once built (the interaction kernel caches on it too), so
   // the rules are cached per section and options: searches re-check one section many times.
-  const key = `${options.rhoMax ?? ""}|${options.dagg ?? ""}|${options.exposure ?? ""}`;
+  const key = `${options.rhoMax ?? ""}|${options.dagg ?? ""}|${options.exposure ?? ""}|${options.displayUnits ?? "US"}`;
   const hit = cache.get(section);
   if (hit !== undefined && hit.key === key) return { rules: hit.rules.slice(), crossTies: hit.crossTies };
   const result = computeDetailing(section, options);
@@ -40,13 +41,14 @@ const cache = new WeakMap<ResolvedSection, { key: string; rules: DetailingResult
 function computeDetailing(section: ResolvedSection, options: CheckOptions): { rules: DetailingResult[]; crossTies: CrossTieCount } {
   const rules: DetailingResult[] = [...checkSteelRatio(section, options.rhoMax)];
   rules.push(checkBarCount(section));
-  rules.push(checkClearSpacing(section, options.dagg ?? 0.75));
-  rules.push(checkCover(section, options.exposure ?? "interior"));
+  const units = options.displayUnits ?? "US";
+  rules.push(checkClearSpacing(section, options.dagg ?? 0.75, units));
+  rules.push(checkCover(section, options.exposure ?? "interior", units));
   const crossTies = countCrossTies(section);
   if (section.confinement === "spiral") {
-    rules.push(...checkSpiral(section, barProperties(section.tie.size).area, options.dagg ?? 0.75));
+    rules.push(...checkSpiral(section, barProperties(section.tie.size).area, options.dagg ?? 0.75, units));
   } else {
-    rules.push(...checkTies(section));
+    rules.push(...checkTies(section, units));
   }
   rules.push(checkLateralSupport(section, crossTies));
   return { rules, crossTies };

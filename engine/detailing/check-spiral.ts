@@ -1,4 +1,5 @@
 import type { DetailingResult, ResolvedSection } from "../types";
+import { formatLength } from "./format-length";
 
 /**
  * Minimum spiral ratio ρs,min = 0.45 (Ag/Ach − 1) f'c/fyt (25.7.3.3) and the provided
@@ -25,7 +26,7 @@ export function computeSpiralRatio(section: ResolvedSection, spiralArea: number)
  * @param dagg maximum aggregate size, in
  * @example checkSpiral(sec, 0.11, 0.75)
  */
-export function checkSpiral(section: ResolvedSection, spiralArea: number, dagg = 0.75): DetailingResult[] {
+export function checkSpiral(section: ResolvedSection, spiralArea: number, dagg = 0.75, units: "US" | "SI" = "US"): DetailingResult[] {
   const { rho, rhoMin } = computeSpiralRatio(section, spiralArea);
   const clear = section.tie.spacing - section.tie.db;
   const minClear = Math.max(1, (4 / 3) * dagg);
@@ -34,13 +35,13 @@ export function checkSpiral(section: ResolvedSection, spiralArea: number, dagg =
   if (!ratio.ok) ratio.message = `spiral ratio ρs = ${rho.toFixed(4)} is below 0.45 (Ag/Ach − 1) f'c/fyt = ${rhoMin.toFixed(4)}: reduce the pitch or use a larger spiral bar`;
   out.push(ratio);
   const pmax: DetailingResult = { rule: "spiral-pitch-max", clause: "25.7.3.1", ok: clear <= 3 + 1e-9, value: clear, limit: 3, unit: "in" };
-  if (!pmax.ok) pmax.message = `clear spiral pitch ${clear.toFixed(2)} in exceeds 3 in`;
+  if (!pmax.ok) pmax.message = `clear spiral pitch ${formatLength(clear, units)} exceeds 3 in`;
   out.push(pmax);
   const pmin: DetailingResult = { rule: "spiral-pitch-min", clause: "25.7.3.1", ok: clear >= minClear - 1e-9, value: clear, limit: minClear, unit: "in" };
-  if (!pmin.ok) pmin.message = `clear spiral pitch ${clear.toFixed(2)} in is less than max(1 in, 4/3 dagg) = ${minClear.toFixed(2)} in: use a larger spiral bar`;
+  if (!pmin.ok) pmin.message = `clear spiral pitch ${formatLength(clear, units)} is less than max(1 in, 4/3 dagg) = ${formatLength(minClear, units)}: use a larger spiral bar`;
   out.push(pmin);
   const size: DetailingResult = { rule: "spiral-size", clause: "25.7.3.2", ok: section.tie.db >= 0.375 - 1e-9, value: section.tie.db, limit: 0.375, unit: "in" };
-  if (!size.ok) size.message = `spiral bar diameter ${section.tie.db} in is less than 3/8 in`;
+  if (!size.ok) size.message = `spiral bar diameter ${formatLength(section.tie.db, units)} is less than 3/8 in`;
   out.push(size);
   return out;
 }

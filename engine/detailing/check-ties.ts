@@ -1,5 +1,6 @@
 import { barProperties, tieSizeFor } from "../rebar";
 import type { BarSize, DetailingResult, ResolvedSection } from "../types";
+import { formatLength } from "./format-length";
 
 /** The largest and smallest longitudinal bars (by diameter, in). @example findBarExtremes(sec).dbMax // 1.0 for #8 bars */
 export function findBarExtremes(section: ResolvedSection): { largest: BarSize; dbMax: number; dbMin: number } {
@@ -33,7 +34,7 @@ export function maxTieSpacing(section: ResolvedSection, dTie: number): number {
  *
  * @example checkTies(sec) // [{ rule: "tie-size", ... }, { rule: "tie-spacing", ... }]
  */
-export function checkTies(section: ResolvedSection): DetailingResult[] {
+export function checkTies(section: ResolvedSection, units: "US" | "SI" = "US"): DetailingResult[] {
   const { largest } = findBarExtremes(section);
   const required = tieSizeFor(largest);
   const dReq = barProperties(required).db;
@@ -60,12 +61,8 @@ export function checkTies(section: ResolvedSection): DetailingResult[] {
     limit: sMax,
     unit: "in",
     message: spOk
-      ? `${t.given ? "given" : "derived"} tie spacing ${t.spacing} in ≤ min(16 db, 48 dtie, least dimension) = ${round2(sMax)} in`
-      : `tie spacing ${t.spacing} in exceeds min(16 db, 48 dtie, least dimension) = ${round2(sMax)} in`,
+      ? `${t.given ? "given" : "derived"} tie spacing ${formatLength(t.spacing, units)} ≤ min(16 db, 48 dtie, least dimension) = ${formatLength(sMax, units)}`
+      : `tie spacing ${formatLength(t.spacing, units)} exceeds min(16 db, 48 dtie, least dimension) = ${formatLength(sMax, units)}`,
   };
   return [size, spacing];
-}
-
-function round2(v: number): number {
-  return Math.round(v * 100) / 100;
 }

@@ -7,3 +7,4 @@ export { checkTies, maxTieSpacing, findBarExtremes } from "./check-ties";
 export { checkSpiral, computeSpiralRatio } from "./check-spiral";
 export { countCrossTies, checkLateralSupport } from "./count-cross-ties";
 export type { CrossTieCount } from "./count-cross-ties";
+export { formatLength } from "./format-length";

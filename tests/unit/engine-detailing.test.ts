@@ -56,6 +56,8 @@ describe("checkClearSpacing (25.2.3)", () => {
     const r = checkClearSpacing(crowded);
     expect(r.ok).toBe(false);
     expect(r.message).toMatch(/less than/);
+    expect(checkClearSpacing(crowded, 0.75, "SI").message).toMatch(/mm is less than 48\.4 mm/); // 1.5 × 1.27 in = 1.905 in
+    expect(checkDetailing(crowded, { displayUnits: "SI" }).rules.find((x) => x.rule === "clear-spacing")!.message).toMatch(/ mm /);
   });
 
   it("uses the largest bar when sizes are mixed (column-checks.md §7.10)", () => {
