@@ -2,6 +2,7 @@ import { computeRadiusOfGyration } from "../slenderness/compute-radius-of-gyrati
 import { computeSwayMagnifier } from "../slenderness/compute-sway-magnifier";
 import type { AxisConstants } from "../slenderness/run-magnifier-chain";
 import type { Axis, CheckOptions, EiOption, MemberInput, ResolvedSection, SwayAxisData } from "../types";
+import { formatForce } from "./format-value";
 
 /** Sway state of one axis, fixed per member (6.6.4.6). */
 export interface SwayAxisState {
@@ -107,7 +108,7 @@ function axisConstants(
   };
 }
 
-function swayState(ax: AxisConstants, data: SwayAxisData | undefined, axis: Axis): SwayAxisState {
+function swayState(ax: AxisConstants, data: SwayAxisData | undefined, axis: Axis, units: "US" | "SI"): SwayAxisState {
   // 6.2.5.1(a): sway slenderness may be neglected for k ℓu/r ≤ 22
   if (ax.klur <= 22) return { slender: false, deltaS: 1, error: null };
   if (data === undefined) {
@@ -118,7 +119,13 @@ function swayState(ax: AxisConstants, data: SwayAxisData | undefined, axis: Axis
     };
   }
   const s = computeSwayMagnifier(data);
-  if (s.deltaS === null) return { slender: true, deltaS: NaN, error: `about ${axis}: ${s.reason ?? "sway magnifier not available"}` };
+  if (s.deltaS === null) {
+    const reason =
+      "sumPu" in data && !(data.sumPu < 0.75 * data.sumPc)
+        ? `story unstable: ΣPu = ${formatForce(data.sumPu, units)} ≥ 0.75 ΣPc = ${formatForce(0.75 * data.sumPc, units)} (6.6.4.6.2(b))`
+        : (s.reason ?? "sway magnifier not available");
+    return { slender: true, deltaS: NaN, error: `about ${axis}: ${reason}` };
+  }
   return { slender: true, deltaS: s.deltaS, error: null };
 }
 
@@ -158,8 +165,8 @@ export function prepareMember(section: ResolvedSection, member: MemberInput, opt
     segments,
     x,
     y,
-    swayX: member.braced ? null : swayState(x, member.sway?.x, "x"),
-    swayY: member.braced ? null : swayState(y, member.sway?.y, "y"),
+    swayX: member.braced ? null : swayState(x, member.sway?.x, "x", options.displayUnits ?? "US"),
+    swayY: member.braced ? null : swayState(y, member.sway?.y, "y", options.displayUnits ?? "US"),
     circle,
     symAboutX: circle || isMirrored(section, 1, -1),
     symAboutY: circle || isMirrored(section, -1, 1),
