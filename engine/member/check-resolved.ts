@@ -218,6 +218,9 @@ export function checkResolved(
 ): CheckOutput {
   if (loads.length === 0) throw new RangeError("loads must hold at least one load case");
   for (let i = 0; i < loads.length; i++) validateLoad(loads[i] as LoadCase, i);
+  if (extras.prepared !== undefined && (extras.prepared.section !== section || extras.prepared.member !== member)) {
+    throw new RangeError("extras.prepared belongs to another section or member");
+  }
   const prep = extras.prepared ?? prepareMember(section, member, options);
   const s = createCaseScratch();
   const cases: CaseResult[] = new Array<CaseResult>(loads.length);
