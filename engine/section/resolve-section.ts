@@ -121,10 +121,15 @@ export function resolveSection(input: SectionInput): ResolvedSection {
     throw new RangeError("section needs bars or a layout (at least 1 bar)");
   }
   let largest = sizes[0] as BarSize;
-  let smallest = largest;
+  let dbLargest = barProperties(largest).db;
+  let dbSmallest = dbLargest;
   for (const s of sizes) {
-    if (barProperties(s).db > barProperties(largest).db) largest = s;
-    if (barProperties(s).db < barProperties(smallest).db) smallest = s;
+    const db = barProperties(s).db;
+    if (db > dbLargest) {
+      largest = s;
+      dbLargest = db;
+    }
+    if (db < dbSmallest) dbSmallest = db;
   }
 
   const given = input.tie !== undefined;
@@ -132,9 +137,17 @@ export function resolveSection(input: SectionInput): ResolvedSection {
   const dTie = barProperties(tieSize).db;
 
   const bars: ResolvedBar[] = [];
+  let lastSize: BarSize | null = null;
+  let lastArea = 0;
+  let lastDb = 0;
   const pushBar = (x: number, y: number, size: BarSize): void => {
-    const p = barProperties(size);
-    bars.push({ x, y, size, area: p.area, db: p.db });
+    if (size !== lastSize) {
+      const p = barProperties(size);
+      lastSize = size;
+      lastArea = p.area;
+      lastDb = p.db;
+    }
+    bars.push({ x, y, size, area: lastArea, db: lastDb });
   };
 
   if (input.bars !== undefined) {
@@ -221,7 +234,7 @@ export function resolveSection(input: SectionInput): ResolvedSection {
     spacing = deriveSpiralPitch(D, cover, dTie, barProperties(tieSize).area, fc, fy);
   } else {
     // 25.7.2.1: 16 db (smallest longitudinal bar, §7.10), 48 dtie, least dimension
-    const sMax = Math.min(16 * barProperties(smallest).db, 48 * dTie, Math.min(b, h));
+    const sMax = Math.min(16 * dbSmallest, 48 * dTie, Math.min(b, h));
     spacing = Math.floor(sMax + 1e-9);
   }
 
