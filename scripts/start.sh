@@ -19,7 +19,9 @@ start_postgres
 migrate_database
 seed_database
 start_mail_catcher
-if [ -f scripts/worker.ts ]; then start_background worker npx tsx scripts/worker.ts; log "search worker started"; fi
+node scripts/build-workers.mjs
+start_background worker npx tsx scripts/worker.ts
+log "search worker started (more: \`npm run worker\` here or on any machine with the same DATABASE_URL)"
 log "building the app"
 npm run --silent build
 log "serving on http://127.0.0.1:$APP_PORT"

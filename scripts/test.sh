@@ -55,6 +55,7 @@ psql -h 127.0.0.1 -p "$PG_PORT" -U "$PG_USER_NAME" -d postgres -qc "drop databas
 psql -h 127.0.0.1 -p "$PG_PORT" -U "$PG_USER_NAME" -d postgres -qc "create database $PG_DB" >/dev/null
 migrate_database && seed_database || FAILED=$((FAILED + 1))
 start_mail_catcher
+node scripts/build-workers.mjs || FAILED=$((FAILED + 1))
 
 step "typecheck" npx tsc --noEmit -p tsconfig.json
 step "lint" npx eslint .
@@ -65,7 +66,7 @@ count_json "$REPORTS/vitest.json" vitest
 
 step "build" npm run --silent build
 if [ -d "$NEXT_DIST_DIR" ]; then
-  if [ -f scripts/worker.ts ]; then start_background worker-test npx tsx scripts/worker.ts; fi
+  start_background worker-test npx tsx scripts/worker.ts
   start_background app-test npx next start -H 127.0.0.1 -p "$APP_PORT"
   if wait_for_port "$APP_PORT" 60; then
     log "playwright (Chromium at /usr/bin/chromium)"

@@ -1,10 +1,10 @@
 // The search worker process (`npm run worker`; started by `npm start`). Takes search jobs from the
 // pg-boss queue in PostgreSQL and runs them on piscina threads. Start as many as you like, on as
 // many machines as you like, all pointed at the same DATABASE_URL: they share the queue.
-import { getBoss, stopBoss, SEARCH_QUEUE, type SearchJobData } from "../lib/jobs/search-queue";
+import { getBoss, stopBoss, reapSilentSearchJobs, SEARCH_QUEUE, type SearchJobData } from "../lib/jobs/search-queue";
 import { processSearchJob } from "../lib/jobs/process-search-job";
 import { runSearchJob, InvalidSearchRequest, closeSearchPool } from "../lib/jobs/optimizer-runner";
-import { failSearch } from "../db/queries/searches";
+import { failSearch, reapSilentSearches } from "../db/queries/searches";
 import { closeDb } from "../db/client";
 
 const workerName = process.env.WORKER_NAME ?? `worker-${process.pid}`;
@@ -38,14 +38,23 @@ async function main(): Promise<void> {
       }
     },
   );
+  // Every worker also watches for searches whose worker died, so one survivor is enough.
+  reaper = setInterval(() => {
+    reapSilentSearchJobs(reapSilentSearches)
+      .then((ids) => ids.forEach((id) => log(`search ${id} lost its worker: handed back to the queue`)))
+      .catch((error: unknown) => log(`reaper: ${error instanceof Error ? error.message : String(error)}`));
+  }, 2000);
   log(`listening on queue ${SEARCH_QUEUE}`);
 }
+
+let reaper: ReturnType<typeof setInterval> | undefined;
 
 let stopping = false;
 async function shutdown(): Promise<void> {
   if (stopping) return;
   stopping = true;
   log("stopping");
+  if (reaper) clearInterval(reaper);
   await stopBoss().catch(() => undefined);
   await closeSearchPool().catch(() => undefined);
   await closeDb().catch(() => undefined);

@@ -3,7 +3,7 @@
  * failed | cancelled. The worker writes results in one transaction that first clears any partial
  * rows of an earlier attempt, so a retried job never leaves duplicate or lost candidates.
  */
-import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, lt, sql } from "drizzle-orm";
 import { getDb } from "../client";
 import { candidates, searches } from "../schema";
 
@@ -68,6 +68,34 @@ export async function recordProgress(searchId: string, progress: number, kept: n
 export async function searchStatus(searchId: string): Promise<SearchRow["status"] | null> {
   const [row] = await getDb().select({ status: searches.status }).from(searches).where(eq(searches.id, searchId));
   return row?.status ?? null;
+}
+
+/**
+ * The running worker's heartbeat, which also reads whether someone cancelled the search: one
+ * statement, so a live search is touched every beat and a cancelled one is seen at once.
+ */
+export async function beatSearch(searchId: string): Promise<SearchRow["status"] | null> {
+  const rows = await getDb()
+    .update(searches)
+    .set({ updatedAt: new Date() })
+    .where(and(eq(searches.id, searchId), eq(searches.status, "running")))
+    .returning({ status: searches.status });
+  if (rows.length > 0) return "running";
+  return searchStatus(searchId);
+}
+
+/**
+ * Running searches whose worker has stopped beating (the process or its machine died). Each row
+ * is returned to exactly one caller: the same statement pushes its heartbeat forward, so other
+ * workers' reapers skip it while the job is handed on.
+ */
+export async function reapSilentSearches(silentSeconds: number): Promise<Array<{ id: string; jobId: string | null }>> {
+  const cutoff = new Date(Date.now() - silentSeconds * 1000);
+  return getDb()
+    .update(searches)
+    .set({ updatedAt: new Date() })
+    .where(and(eq(searches.status, "running"), lt(searches.updatedAt, cutoff)))
+    .returning({ id: searches.id, jobId: searches.jobId });
 }
 
 export interface StoredCandidate {

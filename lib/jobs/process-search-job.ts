@@ -3,13 +3,7 @@
  * live progress written to the database, stop when someone cancels, and store the results in one
  * transaction. Pure orchestration; the search itself is the optimizer's.
  */
-import {
-  claimSearch,
-  completeSearch,
-  recordProgress,
-  searchStatus,
-  type StoredCandidate,
-} from "@/db/queries/searches";
+import { beatSearch, claimSearch, completeSearch, recordProgress, type StoredCandidate } from "@/db/queries/searches";
 
 export interface SearchProgress {
   /** fraction of the candidate space done, 0…1 */
@@ -42,7 +36,8 @@ export type SearchRunner = (
 export type JobResult = "done" | "cancelled" | "skipped";
 
 const PROGRESS_WRITE_MS = 250;
-const CANCEL_POLL_MS = 400;
+/** Heartbeat period; a search silent for several beats is taken to have lost its worker. */
+export const HEARTBEAT_MS = 400;
 /** Upper bound on rows stored per search; the front is always stored whole. */
 export const MAX_STORED_CANDIDATES = 5000;
 
@@ -81,14 +76,14 @@ export async function processSearchJob(searchId: string, run: SearchRunner): Pro
     lastWrite = now;
     writing = writing.then(() => recordProgress(searchId, latest.fraction, latest.kept)).catch(() => undefined);
   };
-  // Cancellation is a database fact (another process sets it), so poll for it while the search runs.
+  // Cancellation is a database fact (another process sets it): the heartbeat reads it every beat.
   const poll = setInterval(() => {
-    searchStatus(searchId)
+    beatSearch(searchId)
       .then((status) => {
         if (status !== "running") controller.abort();
       })
       .catch(() => undefined);
-  }, CANCEL_POLL_MS);
+  }, HEARTBEAT_MS);
 
   try {
     const outcome = await run(search.request, { onProgress, signal: controller.signal });

@@ -1,8 +1,10 @@
 /**
  * The search queue on pg-boss, in the same PostgreSQL as everything else: any number of worker
  * processes on any number of machines pointed at that database share the queue with no code change.
- * A job whose worker dies stays "active" until it expires (SEARCH_JOB_EXPIRE_SECONDS), then pg-boss
- * hands it to another worker (retryLimit), which re-runs the search from the stored request.
+ * A running search beats a heartbeat into its row; when a worker dies, another worker's reaper sees
+ * the silence (SEARCH_SILENT_SECONDS) and fails the job in pg-boss, which hands it to the next
+ * worker (retryLimit) to re-run from the stored request. Job expiry is only a last resort: pg-boss
+ * also ends a handler that runs longer than it, so it is set far above any search's duration.
  */
 import PgBoss from "pg-boss";
 import { databaseUrl } from "@/db/client";
@@ -19,7 +21,11 @@ interface BossGlobal {
 const store = globalThis as typeof globalThis & BossGlobal;
 
 function expireSeconds(): number {
-  return Number(process.env.SEARCH_JOB_EXPIRE_SECONDS ?? 300);
+  return Number(process.env.SEARCH_JOB_EXPIRE_SECONDS ?? 3600);
+}
+
+export function silentSeconds(): number {
+  return Number(process.env.SEARCH_SILENT_SECONDS ?? 15);
 }
 
 async function startBoss(): Promise<PgBoss> {
@@ -29,7 +35,6 @@ async function startBoss(): Promise<PgBoss> {
     max: 4,
     // How often expired (orphaned) jobs are found and retried.
     maintenanceIntervalSeconds: Number(process.env.SEARCH_MAINTENANCE_SECONDS ?? 30),
-    monitorStateIntervalSeconds: undefined,
   });
   boss.on("error", (error) => console.error("[queue]", error.message));
   await boss.start();
@@ -68,6 +73,17 @@ export async function enqueueSearch(searchId: string): Promise<string> {
   });
   if (!jobId) throw new Error("the queue refused the search job");
   return jobId;
+}
+
+/** Fails the jobs of searches whose worker went silent, so pg-boss retries them elsewhere. */
+export async function reapSilentSearchJobs(reap: (seconds: number) => Promise<Array<{ id: string; jobId: string | null }>>): Promise<string[]> {
+  const silent = await reap(silentSeconds());
+  if (silent.length === 0) return [];
+  const boss = await getBoss();
+  for (const search of silent) {
+    if (search.jobId) await boss.fail(SEARCH_QUEUE, search.jobId, { reason: "worker went silent" });
+  }
+  return silent.map((s) => s.id);
 }
 
 export async function cancelSearchJob(jobId: string): Promise<void> {
