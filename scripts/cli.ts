@@ -10,6 +10,7 @@ const commands: Record<string, () => Promise<{ command: CliCommand }>> = {
   diagram: () => import("../lib/cli/diagram"),
   k: () => import("../lib/cli/k"),
   optimize: () => import("../lib/cli/optimize"),
+  standardize: () => import("../lib/cli/standardize"),
 };
 
 async function main(argv: string[]): Promise<number> {

@@ -32,7 +32,7 @@ export interface StandardizeSolveOptions {
    * program, no reductions, no time limit) or "branch-and-bound" (the combinatorial search alone).
    */
   method?: "auto" | "integer-program" | "branch-and-bound";
-  /** time limit of the integer program in "auto", ms (default 20 000) */
+  /** time limit of the integer program in "auto", ms (default 3 000; the exact branch and bound then finishes) */
   timeoutMs?: number;
 }
 
@@ -44,6 +44,20 @@ export interface SolveHints {
 }
 
 const cents = (x: number) => x / 100;
+
+/** The assumptions every result states. */
+export function describeAssumptions<C extends StandardizeCandidate>(p: PreparedProject<C>, rotatedShareForms: boolean): string[] {
+  const a = [
+    "candidates are used as given: each was checked (ACI 318-19, slenderness included) by the search that produced it; standardization only chooses among them",
+    "a candidate passes when its utilization is ≤ 1 and it is not flagged pass: false",
+    "cost = Σ quantity × cost per column (rounded to cents per mark) + one form set per distinct outline used",
+    rotatedShareForms
+      ? "an outline is shape and size; a b × h and an h × b rectangle share one form set (turned a quarter turn)"
+      : "an outline is shape, size and orientation; a b × h and an h × b rectangle are different form sets",
+  ];
+  if (p.oneFcPerLevel) a.push("every mark with a level uses the level's single f'c; marks without a level are free");
+  return a;
+}
 
 function describeMark(m: { id: string; label: string }): string {
   return m.label === m.id ? `mark ${m.label}` : `mark ${m.label} (${m.id})`;
@@ -105,6 +119,7 @@ function emptyStats(method: StandardizeMethod, ms: number, p: PreparedProject<St
 
 function infeasibleResult<C extends StandardizeCandidate>(
   p: PreparedProject<C>,
+  input: StandardizeInput<C>,
   reasons: string[],
   minOutlines: number | null,
   stats: StandardizeStats,
@@ -120,6 +135,7 @@ function infeasibleResult<C extends StandardizeCandidate>(
     levelFc: [],
     reasons,
     minOutlines,
+    assumptions: describeAssumptions(p, input.rotatedShareForms !== false),
     stats,
   };
 }
@@ -127,6 +143,7 @@ function infeasibleResult<C extends StandardizeCandidate>(
 /** Turns an exact outline-set value into the result the callers see. */
 export function buildResult<C extends StandardizeCandidate>(
   p: PreparedProject<C>,
+  input: StandardizeInput<C>,
   value: OutlineSetValue<C>,
   minOutlines: number | null,
   stats: StandardizeStats,
@@ -154,17 +171,15 @@ export function buildResult<C extends StandardizeCandidate>(
   const outlines: StandardizeOutline[] = value.used.map((oi) => {
     const parts = p.outlines[oi];
     const marks = p.marks.filter((m) => value.choice[m.index]?.outline === oi);
-    const entry: StandardizeOutline = {
+    const dims = parts?.shape === "circle" ? { D: parts.D } : { b: parts?.b, h: parts?.h };
+    return {
       key: parts?.key ?? "",
       shape: parts?.shape ?? "rect",
+      ...dims,
       marks: marks.map((m) => m.id),
       columns: marks.reduce((s, m) => s + m.quantity, 0),
       formSetCost: cents(p.formSetCents),
     };
-    if (parts?.b !== undefined) entry.b = parts.b;
-    if (parts?.h !== undefined) entry.h = parts.h;
-    if (parts?.D !== undefined) entry.D = parts.D;
-    return entry;
   });
   outlines.sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
   const levelFc = p.levels.flatMap((level, li) => {
@@ -182,6 +197,7 @@ export function buildResult<C extends StandardizeCandidate>(
     levelFc,
     reasons: [],
     minOutlines,
+    assumptions: describeAssumptions(p, input.rotatedShareForms !== false),
     stats,
   };
 }
@@ -202,7 +218,7 @@ export function solvePrepared<C extends StandardizeCandidate>(
   const elapsed = () => performance.now() - t0;
 
   const structural = findStructuralReasons(p, input);
-  if (structural.length > 0) return infeasibleResult(p, structural, null, emptyStats("none", elapsed(), p));
+  if (structural.length > 0) return infeasibleResult(p, input, structural, null, emptyStats("none", Math.round(elapsed() * 10) / 10, p));
 
   // upper bound: greedy + swaps, and any given start sets
   let best = improveOutlineSet(p, N).value;
@@ -222,8 +238,8 @@ export function solvePrepared<C extends StandardizeCandidate>(
           ? `no assignment exists${fcNote}`
           : `no assignment uses at most ${N} distinct outline${N === 1 ? "" : "s"}${fcNote}: the fewest that give every mark a passing candidate is ${minOutlines}`;
       stats.method = "none";
-      stats.ms = elapsed();
-      return infeasibleResult(p, [reason], minOutlines, stats);
+      stats.ms = Math.round(elapsed() * 10) / 10;
+      return infeasibleResult(p, input, [reason], minOutlines, stats);
     }
   }
   const incumbentCents = () => (best.uncovered === 0 ? best.totalCents : Number.POSITIVE_INFINITY);
@@ -267,7 +283,7 @@ export function solvePrepared<C extends StandardizeCandidate>(
       let inModel = 0;
       for (let o = 0; o < nO; o++) if (state[o] !== -1) inModel++;
       stats.outlinesInModel = inModel;
-      const ip = solveIntegerProgram(p, { maxOutlines: N, state, timeoutMs: options.timeoutMs ?? 20_000 });
+      const ip = solveIntegerProgram(p, { maxOutlines: N, state, timeoutMs: options.timeoutMs ?? 3_000 });
       stats.variables = ip.variables;
       stats.constraints = ip.constraints;
       if (ip.feasible) adopt(ip.open);
@@ -283,17 +299,17 @@ export function solvePrepared<C extends StandardizeCandidate>(
       }
     }
   }
-  stats.ms = elapsed();
+  stats.ms = Math.round(elapsed() * 10) / 10;
   stats.optimal = proven;
   if (best.uncovered > 0) {
     // the exact methods found nothing either: N is below the fewest outlines needed
     if (minOutlines === undefined) minOutlines = countMinimumOutlines(p);
     const reason = `no assignment uses at most ${N} distinct outline${N === 1 ? "" : "s"}${minOutlines !== null && minOutlines !== undefined ? `: the fewest that give every mark a passing candidate is ${minOutlines}` : ""}`;
     stats.method = "none";
-    return infeasibleResult(p, [reason], minOutlines ?? null, stats);
+    return infeasibleResult(p, input, [reason], minOutlines ?? null, stats);
   }
   stats.lowerBound = proven ? cents(best.totalCents) : Number.isFinite(rootBound) ? cents(Math.ceil(rootBound - 1e-6)) : null;
-  return buildResult(p, best, minOutlines ?? null, stats);
+  return buildResult(p, input, best, minOutlines ?? null, stats);
 }
 
 /**

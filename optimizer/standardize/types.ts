@@ -135,7 +135,9 @@ export interface StandardizeResult<C extends StandardizeCandidate = StandardizeC
   levelFc: Array<{ level: string; fc: number }>;
   /** why no assignment exists (empty when feasible) */
   reasons: string[];
-  /** the fewest distinct outlines any assignment needs (null when no mark set is coverable) */
+  /** the fewest distinct outlines any assignment needs (null when unknown or impossible) */
   minOutlines: number | null;
+  /** what the result takes for granted (shown with it; it supports, never replaces, an engineer's judgement) */
+  assumptions: string[];
   stats: StandardizeStats;
 }
