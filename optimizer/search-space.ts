@@ -229,6 +229,14 @@ export interface Family {
   counts: number[];
   /** cross-ties per tie set per layout: [alongH, alongB] */
   crossTies: Array<[number, number]>;
+  /** Ast per layout, summed bar by bar as resolveSection does, in² */
+  ast: number[];
+}
+
+function sumBars(area: number, count: number): number {
+  let Ast = 0;
+  for (let i = 0; i < count; i++) Ast += area;
+  return Ast;
 }
 
 export interface Quantity {
@@ -322,7 +330,7 @@ export function enumerateFamilies(problem: SearchProblem, part: { k: number; K: 
           index: families.length, shape: "rect", b: b.v, h: h.v, D: 0, bDisp: b.disp, hDisp: h.disp, DDisp: 0,
           size, db: bar.db, area: bar.area, weightPlf: bar.weightPlf, fy, confinement: "tied",
           tieSize, tieDb: tie.db, tieWeightPlf: tie.weightPlf, tieSpacing: Math.floor(sMax + 1e-9), spiralPitch: [],
-          confinementOk: problem.fcs.map(() => true), layouts, counts, crossTies,
+          confinementOk: problem.fcs.map(() => true), layouts, counts, crossTies, ast: counts.map((c) => sumBars(bar.area, c)),
         });
       }
       for (const D of problem.circles) {
@@ -362,7 +370,7 @@ export function enumerateFamilies(problem: SearchProblem, part: { k: number; K: 
             index: families.length, shape: "circle", b: D.v, h: D.v, D: D.v, bDisp: D.disp, hDisp: D.disp, DDisp: D.disp,
             size, db: bar.db, area: bar.area, weightPlf: bar.weightPlf, fy, confinement,
             tieSize, tieDb: tie.db, tieWeightPlf: tie.weightPlf, tieSpacing: Math.floor(sMax + 1e-9), spiralPitch,
-            confinementOk, layouts, counts, crossTies: layouts.map(() => [0, 0]),
+            confinementOk, layouts, counts, crossTies: layouts.map(() => [0, 0]), ast: counts.map((c) => sumBars(bar.area, c)),
           });
         }
       }
@@ -463,9 +471,7 @@ export function carbonOf(problem: SearchProblem, q: Quantity, fcIndex: number): 
 /** φPn,max of a candidate, kip, with resolveSection's arithmetic (Table 22.4.2.1). */
 export function phiPnMaxOf(fam: Family, layoutIndex: number, fc: number): number {
   const Ag = fam.shape === "rect" ? fam.b * fam.h : (Math.PI * fam.D * fam.D) / 4;
-  const count = fam.counts[layoutIndex] as number;
-  let Ast = 0;
-  for (let i = 0; i < count; i++) Ast += fam.area;
+  const Ast = fam.ast[layoutIndex] as number;
   const P0 = 0.85 * fc * (Ag - Ast) + fam.fy.v * Ast;
   const PnMax = (fam.confinement === "spiral" ? 0.85 : 0.8) * P0;
   return (fam.confinement === "spiral" ? 0.75 : 0.65) * PnMax;
@@ -511,14 +517,21 @@ export function buildCandidateTable(problem: SearchProblem, families: Family[] =
     order: new Uint32Array(n),
   };
   let k = 0;
+  const braceAdd = problem.braceLevels.map((n) => n * problem.prices.brace);
   for (const fam of families) {
+    const laps = problem.fcs.map((fc) => computeLapLength(fam.fy.v, fam.db, fc.v));
     for (let li = 0; li < fam.layouts.length; li++) {
+      let q: Quantity | null = null;
       for (let fi = 0; fi < problem.fcs.length; fi++) {
         if (!fam.confinementOk[fi]) continue;
-        const q = quantitiesOf(problem, fam, li, fi);
+        // quantities depend on f'c only through the lap (25.5.5.1) and the spiral pitch
+        if (q === null || fam.confinement === "spiral" || laps[fi] !== laps[fi - 1]) q = quantitiesOf(problem, fam, li, fi);
         const carbon = carbonOf(problem, q, fi);
+        // computeCost adds the brace line last, so the total with n braces is total₀ + n·price
+        const base = costOf(problem, q, fi, 0);
         for (let bi = 0; bi < problem.braceLevels.length; bi++) {
-          const cost = costOf(problem, q, fi, problem.braceLevels[bi] as number);
+          const n = problem.braceLevels[bi] as number;
+          const cost = n > 0 ? base + (braceAdd[bi] as number) : base;
           t.family[k] = fam.index;
           t.layout[k] = li;
           t.fc[k] = fi;

@@ -101,7 +101,6 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
   const nCases = loads.length;
   const util = new Staircase();
   const carb = new Staircase();
-  const lastDeciding = new Int32Array(table.families.length);
   const passing: EvaluatedCandidate[] = [];
   const regions: Record<string, RegionTally> = {};
   let fullChecks = 0;
@@ -144,12 +143,14 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
     }
     const section = resolveSection(sectionInputOf(problem, { ...fam, fy: fam.fy.v }, fam.layouts[li] as [number, number], fc));
     const prep = prepareMember(section, members[table.brace[i] as number] as MemberInput, problem.options);
-    const first = lastDeciding[famIndex] as number;
+    // Cases in the request's order on a fresh section: the engine's biaxial solver learns
+    // from its previous solutions on a section, so a case's utilization can depend (~1e-4)
+    // on the cases evaluated before it. Evaluating exactly as checkResolved does keeps every
+    // number identical to the member check and to the exhaustive search.
     let worst = -Infinity;
     let governing = -1;
     let outcome: "pass" | "fail" | "dominated" = "pass";
-    for (let j = 0; j < nCases; j++) {
-      const ci = j === 0 ? first : j <= first ? j - 1 : j;
+    for (let ci = 0; ci < nCases; ci++) {
       const u = caseUtilization(prep, loads[ci] as LoadCase);
       caseChecks++;
       if (u > worst) {
@@ -163,13 +164,11 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
           continue;
         }
         outcome = "fail";
-        lastDeciding[famIndex] = ci;
         tally.failedBy[ci] = (tally.failedBy[ci] ?? 0) + 1;
         break;
       }
       if (carbonDominated && util.dominatesAll(cents, toUtilUnits(worst))) {
         outcome = "dominated";
-        lastDeciding[famIndex] = governing;
         tally.dominated++;
         break;
       }
@@ -177,7 +176,6 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
     if (exhaustive) fullChecks++;
     if (outcome !== "pass") continue;
     if (!exhaustive) fullChecks++;
-    lastDeciding[famIndex] = governing;
     tally.passing++;
     const uu = toUtilUnits(worst);
     util.add(cents, uu);

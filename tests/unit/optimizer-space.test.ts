@@ -1,0 +1,170 @@
+/**
+ * The candidate space against the engine it stands in for: the closed-form detailing filter
+ * must keep exactly the layouts checkDetailing accepts, and quantities, cost, carbon and
+ * φPn,max must be bit for bit what computeQuantities, computeCost, computeCarbon and
+ * resolveSection give (the fronts compare cents, so "close" is not enough).
+ */
+import { describe, expect, it } from "vitest";
+import {
+  checkDetailing,
+  computeCarbon,
+  computeCost,
+  computeQuantities,
+  countCrossTies,
+  resolveSection,
+} from "../../engine";
+import type { SectionInput } from "../../engine/types";
+import { parseOptimizeRequest } from "../../lib/validation/optimize-request";
+import { formatCandidateId, parseCandidateId } from "../../optimizer/candidate-id";
+import {
+  buildCandidateTable,
+  buildSearchProblem,
+  candidateIdOf,
+  carbonOf,
+  costOf,
+  enumerateFamilies,
+  phiPnMaxOf,
+  quantitiesOf,
+  sectionInputOf,
+  type SearchProblem,
+} from "../../optimizer/search-space";
+import { carbon, prices, tenCases } from "./optimizer-fixtures";
+
+function problemOf(space: Record<string, unknown>, extra: Record<string, unknown> = {}): SearchProblem {
+  const r = parseOptimizeRequest({ member: { lu: 276, kx: 1, ky: 1, braced: true }, loads: tenCases, prices, carbon, space, ...extra });
+  if (!r.ok) throw new Error(JSON.stringify(r.error));
+  return buildSearchProblem(r.value);
+}
+
+describe("detailing filter = engine checkDetailing", () => {
+  for (const [label, space] of [
+    ["ρmax 0.04, fy 60 and 75", { b: [12, 24, 3], h: [12, 24, 3], D: [12, 24, 3], fc: [4, 8], fy: [60, 75], sizes: ["#6", "#9", "#11"], confinement: ["tied", "spiral"] }],
+    ["ρmax 0.08, cover 2 in, dagg 1 in", { b: [12, 20, 4], h: [14, 22, 4], D: [14, 22, 4], fc: [5], rhoMax: 0.08, cover: 2, dagg: 1, sizes: ["#8", "#10", "#11"], confinement: ["tied", "spiral"] }],
+  ] as const) {
+    it(`keeps exactly the layouts the engine accepts (${label})`, () => {
+      const problem = problemOf(space as Record<string, unknown>);
+      const families = enumerateFamilies(problem);
+      const kept = new Set<string>();
+      for (const f of families) for (const [a, b] of f.layouts) kept.add(`${f.shape}|${f.b}|${f.h}|${f.size}|${f.fy.v}|${f.confinement}|${a}|${b}`);
+      let accepted = 0;
+      let tried = 0;
+      for (const fy of problem.fys) {
+        for (const size of problem.sizes) {
+          const shapes: Array<{ shape: "rect" | "circle"; b: number; h: number; conf: "tied" | "spiral" }> = [
+            ...(problem.confinements.includes("tied") ? problem.rects.map((r) => ({ shape: "rect" as const, b: r.b.v, h: r.h.v, conf: "tied" as const })) : []),
+            ...problem.circles.flatMap((c) => problem.confinements.map((conf) => ({ shape: "circle" as const, b: c.v, h: c.v, conf }))),
+          ];
+          for (const s of shapes) {
+            const pairs: Array<[number, number]> = [];
+            if (s.shape === "rect") for (let nb = 2; nb <= 12; nb++) for (let nh = 2; nh <= 12; nh++) pairs.push([nb, nh]);
+            else for (let n = 3; n <= 30; n++) pairs.push([n, 0]);
+            for (const pair of pairs) {
+              const fam = { shape: s.shape, b: s.b, h: s.h, D: s.b, size, fy: fy.v, confinement: s.conf };
+              for (let fi = 0; fi < problem.fcs.length; fi++) {
+                const input: SectionInput = sectionInputOf(problem, fam, pair, (problem.fcs[fi] as { v: number }).v);
+                let ok = false;
+                try {
+                  ok = checkDetailing(resolveSection(input), problem.options).rules.every((r) => r.ok);
+                } catch {
+                  ok = false; // the layout does not fit inside the cover
+                }
+                tried++;
+                const key = `${s.shape}|${s.b}|${s.h}|${size}|${fy.v}|${s.conf}|${pair[0]}|${pair[1]}`;
+                const family = families.find((f) => f.shape === s.shape && f.b === s.b && f.h === s.h && f.size === size && f.fy.v === fy.v && f.confinement === s.conf);
+                const inSpace = kept.has(key) && family !== undefined && family.confinementOk[fi] === true;
+                expect(inSpace, `${key} f'c index ${fi}`).toBe(ok);
+                if (ok) accepted++;
+              }
+            }
+          }
+        }
+      }
+      expect(accepted).toBeGreaterThan(100);
+      expect(tried).toBeGreaterThan(accepted);
+    });
+  }
+});
+
+describe("quantities, cost, carbon and φPn,max = the engine's, bit for bit", () => {
+  it("over a whole space, every brace level", () => {
+    const problem = problemOf(
+      { b: [12, 30, 6], h: [12, 30, 6], D: [14, 30, 8], fc: [4, 8], fy: [60, 75], sizes: ["#6", "#8", "#11"], confinement: ["tied", "spiral"] },
+      { member: { lu: 250, kx: 1, ky: 1, braced: true, pourHeight: 262 } },
+    );
+    const table = buildCandidateTable(problem);
+    expect(table.n).toBeGreaterThan(2000);
+    for (let i = 0; i < table.n; i++) {
+      const fam = table.families[table.family[i] as number];
+      if (fam === undefined) throw new Error("family");
+      const li = table.layout[i] as number;
+      const fi = table.fc[i] as number;
+      const fc = (problem.fcs[fi] as { v: number }).v;
+      const n = problem.braceLevels[table.brace[i] as number] as number;
+      const sec = resolveSection(sectionInputOf(problem, { ...fam, fy: fam.fy.v }, fam.layouts[li] as [number, number], fc));
+      const q = computeQuantities(sec, { ...problem.member, braceLevels: n }, countCrossTies(sec));
+      const mine = quantitiesOf(problem, fam, li, fi);
+      expect(mine.concreteYd3).toBe(q.concreteYd3);
+      expect(mine.longitudinalLb).toBe(q.longitudinalLb);
+      expect(mine.tieLb).toBe(q.tieLb);
+      expect(mine.crossTieLb).toBe(q.crossTieLb);
+      expect(mine.steelLb).toBe(q.steelLb);
+      expect(mine.formFt2).toBe(q.formFt2);
+      const cost = computeCost(q, fc, n, problem.prices).total;
+      expect(table.cost[i]).toBe(cost);
+      expect(costOf(problem, mine, fi, n)).toBe(cost);
+      expect(table.carbon[i]).toBe(computeCarbon(q, fc, problem.carbon).total);
+      expect(carbonOf(problem, mine, fi)).toBe(computeCarbon(q, fc, problem.carbon).total);
+      expect(phiPnMaxOf(fam, li, fc)).toBe(sec.phiPnMax);
+    }
+  });
+});
+
+describe("the space a request describes", () => {
+  it("takes both orientations of unequal ranges, and the architect's limits narrow it", () => {
+    const p = problemOf({ shapes: ["rect"], b: [12, 16, 4], h: [20, 24, 4] });
+    expect(p.rects.map((r) => `${r.b.disp}x${r.h.disp}`).sort()).toEqual(
+      ["12x20", "12x24", "16x20", "16x24", "20x12", "24x12", "20x16", "24x16"].sort(),
+    );
+    const narrow = problemOf({ shapes: ["rect", "circle"], b: [12, 30, 6], h: [12, 30, 6], D: [12, 30, 6], maxWidth: 24 });
+    expect(Math.max(...narrow.rects.map((r) => Math.max(r.b.disp, r.h.disp)))).toBe(24);
+    expect(Math.max(...narrow.circles.map((c) => c.disp))).toBe(24);
+    const square = problemOf({ shapes: ["rect"], b: [12, 30, 6], h: [12, 30, 6], squareOnly: true });
+    expect(square.rects.every((r) => r.b.disp === r.h.disp)).toBe(true);
+    expect(square.rects).toHaveLength(4);
+  });
+
+  it("defaults to the documented space (rect and circles 12–36 in step 2, f'c 4/5/6/8, #6–#11, 0–2 braces)", () => {
+    const p = problemOf({});
+    expect(p.rects).toHaveLength(13 * 13);
+    expect(p.circles.map((c) => c.disp)).toEqual([12, 14, 16, 18, 20, 22, 24, 26, 28, 30, 32, 34, 36]);
+    expect(p.fcs.map((f) => f.disp)).toEqual([4, 5, 6, 8]);
+    expect(p.sizes).toEqual(["#6", "#7", "#8", "#9", "#10", "#11"]);
+    expect(p.braceLevels).toEqual([0, 1, 2]);
+    expect(p.rhoMax).toBe(0.04);
+  });
+
+  it("gives every candidate a contract id that reads back to its parts", () => {
+    const p = problemOf({ b: [16, 20, 4], h: [16, 20, 4], D: [16, 20, 4], fc: [4.5, 8], sizes: ["#8"], braceLevels: [0, 2], confinement: ["tied", "spiral"] }, { prices: { ...prices, concrete: { ...prices.concrete, "4.5": 195 } }, carbon: { ...carbon, concrete: { ...carbon.concrete, "4.5": 275 } } });
+    const t = buildCandidateTable(p);
+    const ids = new Set<string>();
+    for (let i = 0; i < t.n; i++) {
+      const id = candidateIdOf(p, t, i);
+      ids.add(id);
+      const parts = parseCandidateId(id);
+      expect(parts, id).not.toBeNull();
+      expect(formatCandidateId(parts as NonNullable<typeof parts>)).toBe(id);
+    }
+    expect(ids.size).toBe(t.n);
+    expect([...ids].some((id) => /^c\d+-f4\.5-y60-\d+#8-s-b2$/.test(id))).toBe(true);
+  });
+});
+
+describe("candidate ids", () => {
+  it("spell the contract's example exactly", () => {
+    expect(formatCandidateId({ shape: "rect", b: 18, h: 22, fc: 5, fy: 60, size: "#8", nb: 3, nh: 3, braceLevels: 0 })).toBe("r18x22-f5-y60-8#8-p3x3-b0");
+    expect(formatCandidateId({ shape: "circle", D: 24, fc: 6, fy: 60, size: "#9", n: 8, confinement: "spiral", braceLevels: 1 })).toBe("c24-f6-y60-8#9-s-b1");
+    expect(formatCandidateId({ shape: "circle", D: 24, fc: 6, fy: 60, size: "#9", n: 8, confinement: "tied", braceLevels: 0 })).toBe("c24-f6-y60-8#9-t-b0");
+    expect(parseCandidateId("r18x22-f5-y60-9#8-p3x3-b0")).toBeNull(); // count disagrees with nb × nh
+    expect(parseCandidateId("x")).toBeNull();
+  });
+});
