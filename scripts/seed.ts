@@ -4,6 +4,7 @@ import { and, eq } from "drizzle-orm";
 import { getDb, closeDb } from "../db/client";
 import { users, workspaces, memberships } from "../db/schema";
 import { DEMO_ACCOUNTS, DEMO_WORKSPACE } from "../lib/demo-accounts";
+import { seedDemoBuilding } from "./seed-demo-building";
 
 async function main(): Promise<void> {
   const db = getDb();
@@ -27,6 +28,8 @@ async function main(): Promise<void> {
       await db.insert(memberships).values({ workspaceId: workspace.id, userId: user.id, role: account.role });
     }
   }
+  const [owner] = await db.select().from(users).where(eq(users.email, DEMO_ACCOUNTS[0].email));
+  await seedDemoBuilding(db, workspace.id, owner?.id ?? null);
   await closeDb();
   console.log("[caryatid] demo data ready");
 }
