@@ -60,7 +60,7 @@ export function describeAssumptions<C extends StandardizeCandidate>(p: PreparedP
 }
 
 function describeMark(m: { id: string; label: string }): string {
-  return m.label === m.id ? `mark ${m.label}` : `mark ${m.label} (${m.id})`;
+  return m.label === m.id ? `mark ${m.label}` : `mark ${m.label} (id ${m.id})`;
 }
 
 /** Reasons no N can help: marks with nothing passing, levels with no common f'c. */

@@ -328,8 +328,8 @@ describe("infeasible and invalid input", () => {
     expect(r.totalCost).toBeNull();
     expect(r.assignment).toEqual([]);
     expect(r.reasons).toEqual([
-      "mark C2 (m2) has no passing candidate (no candidates given)",
-      "mark C3 (m3) has no passing candidate (1 given, none with utilization ≤ 1)",
+      "mark C2 (id m2) has no passing candidate (no candidates given)",
+      "mark C3 (id m3) has no passing candidate (1 given, none with utilization ≤ 1)",
     ]);
     // the sweep gives the same answer for every N
     const sweep = sweepOutlines({
