@@ -3,7 +3,7 @@
 // `node scripts/build-workers.mjs` builds; importing `ensureWorkerBundle` rebuilds only when a
 // source file is newer than the bundle (CLI, benchmarks, tests).
 import { build } from "esbuild";
-import { existsSync, readdirSync, statSync } from "node:fs";
+import { existsSync, readdirSync, renameSync, statSync } from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 
@@ -12,9 +12,11 @@ export const WORKER_OUT = path.join(root, "dist", "workers", "optimizer-worker.m
 const SOURCES = ["engine", "optimizer", "lib/validation"];
 
 export async function buildWorkers() {
+  // write beside the bundle and rename: a process starting a pool never reads half a file
+  const tmp = `${WORKER_OUT}.${process.pid}.tmp`;
   await build({
     entryPoints: [path.join(root, "optimizer", "worker-entry.ts")],
-    outfile: WORKER_OUT,
+    outfile: tmp,
     bundle: true,
     platform: "node",
     format: "esm",
@@ -23,6 +25,7 @@ export async function buildWorkers() {
     logLevel: "warning",
     alias: { "@": root },
   });
+  renameSync(tmp, WORKER_OUT);
   return WORKER_OUT;
 }
 
