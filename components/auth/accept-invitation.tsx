@@ -7,7 +7,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { newcomerSchema } from "@/lib/validation/members";
 import { PASSWORD_MIN_LENGTH } from "@/lib/auth/password-policy";
 import { fetchJson } from "@/components/providers";
-import { applyServerErrors, FormAlert, TextField } from "./form-parts";
+import { applyServerErrors, FormAlert, TextField, useHydrated } from "./form-parts";
 
 interface Accepted {
   workspaceId: string;
@@ -25,6 +25,7 @@ export function JoinWorkspaceButton({ token, workspaceName }: JoinWorkspaceButto
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
+  const hydrated = useHydrated();
   async function onClick() {
     setBusy(true);
     setError(null);
@@ -40,7 +41,7 @@ export function JoinWorkspaceButton({ token, workspaceName }: JoinWorkspaceButto
   return (
     <div className="space-y-3">
       {error ? <FormAlert>{error}</FormAlert> : null}
-      <button type="button" className="btn-primary w-full justify-center" onClick={onClick} disabled={busy} autoFocus>
+      <button type="button" className="btn-primary w-full justify-center" onClick={onClick} disabled={!hydrated || busy} autoFocus>
         {busy ? "Joining…" : `Join ${workspaceName}`}
       </button>
     </div>
@@ -58,6 +59,7 @@ export function NewcomerForm({ token, email }: NewcomerFormProps) {
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm({ resolver: zodResolver(newcomerSchema), defaultValues: { name: "", password: "" }, mode: "onTouched" });
   const { errors, isSubmitting } = form.formState;
+  const hydrated = useHydrated();
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
@@ -78,7 +80,7 @@ export function NewcomerForm({ token, email }: NewcomerFormProps) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-4">
       {formError ? <FormAlert>{formError}</FormAlert> : null}
       <TextField label="E-mail" type="email" value={email} readOnly hint="The invitation was sent to this address." />
       <TextField label="Your name" autoComplete="name" autoFocus error={errors.name?.message} {...form.register("name")} />
@@ -90,7 +92,7 @@ export function NewcomerForm({ token, email }: NewcomerFormProps) {
         error={errors.password?.message}
         {...form.register("password")}
       />
-      <button type="submit" className="btn-primary w-full justify-center" disabled={isSubmitting}>
+      <button type="submit" className="btn-primary w-full justify-center" disabled={!hydrated || isSubmitting}>
         {isSubmitting ? "Joining…" : "Create account and join"}
       </button>
     </form>

@@ -7,7 +7,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { accountNameSchema, passwordChangeSchema } from "@/lib/validation/auth";
 import { PASSWORD_MIN_LENGTH } from "@/lib/auth/password-policy";
 import { fetchJson } from "@/components/providers";
-import { applyServerErrors, FormAlert, TextField } from "./form-parts";
+import { applyServerErrors, FormAlert, TextField, useHydrated } from "./form-parts";
 
 export interface AccountNameFormProps {
   name: string;
@@ -19,6 +19,7 @@ export function AccountNameForm({ name }: AccountNameFormProps) {
   const [status, setStatus] = useState<{ tone: "error" | "success"; text: string } | null>(null);
   const form = useForm({ resolver: zodResolver(accountNameSchema), defaultValues: { name }, mode: "onTouched" });
   const { errors, isSubmitting } = form.formState;
+  const hydrated = useHydrated();
   const onSubmit = form.handleSubmit(async (values) => {
     setStatus(null);
     try {
@@ -34,10 +35,10 @@ export function AccountNameForm({ name }: AccountNameFormProps) {
     }
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-4">
       <TextField label="Name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
       <div aria-live="polite">{status ? <FormAlert tone={status.tone}>{status.text}</FormAlert> : null}</div>
-      <button type="submit" className="btn-primary" disabled={isSubmitting}>
+      <button type="submit" className="btn-primary" disabled={!hydrated || isSubmitting}>
         {isSubmitting ? "Saving…" : "Save name"}
       </button>
     </form>
@@ -52,6 +53,7 @@ export function PasswordChangeForm() {
     mode: "onTouched",
   });
   const { errors, isSubmitting } = form.formState;
+  const hydrated = useHydrated();
   const onSubmit = form.handleSubmit(async (values) => {
     setStatus(null);
     try {
@@ -64,7 +66,7 @@ export function PasswordChangeForm() {
     }
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-4">
       <TextField label="Current password" type="password" autoComplete="current-password" error={errors.currentPassword?.message} {...form.register("currentPassword")} />
       <TextField
         label="New password"
@@ -75,7 +77,7 @@ export function PasswordChangeForm() {
         {...form.register("newPassword")}
       />
       <div aria-live="polite">{status ? <FormAlert tone={status.tone}>{status.text}</FormAlert> : null}</div>
-      <button type="submit" className="btn-primary" disabled={isSubmitting}>
+      <button type="submit" className="btn-primary" disabled={!hydrated || isSubmitting}>
         {isSubmitting ? "Changing…" : "Change password"}
       </button>
     </form>

@@ -4,7 +4,7 @@
  * error beside it, a form-level alert, and the glue that puts the server's field issues on the
  * fields they name (the server validates with the same zod schema as the form).
  */
-import { useId, type InputHTMLAttributes, type ReactNode, type Ref, type SelectHTMLAttributes } from "react";
+import { useId, useSyncExternalStore, type InputHTMLAttributes, type ReactNode, type Ref, type SelectHTMLAttributes } from "react";
 import type { FieldValues, Path, UseFormSetError } from "react-hook-form";
 import { ApiError } from "@/components/providers";
 
@@ -112,4 +112,14 @@ export function applyServerErrors<T extends FieldValues>(error: unknown, setErro
     }
   }
   return placed ? null : error.message;
+}
+
+const noSubscription = () => () => undefined;
+
+/**
+ * False during server rendering and until React has hydrated. Submit buttons stay disabled until
+ * then, so a click before the scripts load never falls back to a plain form submission.
+ */
+export function useHydrated(): boolean {
+  return useSyncExternalStore(noSubscription, () => true, () => false);
 }

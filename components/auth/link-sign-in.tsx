@@ -3,7 +3,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { signIn } from "next-auth/react";
 import Link from "next/link";
-import { FormAlert } from "./form-parts";
+import { FormAlert, useHydrated } from "./form-parts";
 
 export interface LinkSignInProps {
   email: string;
@@ -18,6 +18,7 @@ export interface LinkSignInProps {
 export function LinkSignIn({ email, token, callbackUrl }: LinkSignInProps) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
+  const hydrated = useHydrated();
   const [failed, setFailed] = useState(false);
 
   async function onClick() {
@@ -43,7 +44,7 @@ export function LinkSignIn({ email, token, callbackUrl }: LinkSignInProps) {
       <p className="text-sm text-ink-700">
         Signing in as <strong className="text-ink-900">{email}</strong>.
       </p>
-      <button type="button" className="btn-primary w-full justify-center" onClick={onClick} disabled={busy} autoFocus>
+      <button type="button" className="btn-primary w-full justify-center" onClick={onClick} disabled={!hydrated || busy} autoFocus>
         {busy ? "Signing in…" : "Sign in to Caryatid"}
       </button>
     </div>

@@ -6,7 +6,7 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { signInSchema, emailLinkRequestSchema } from "@/lib/validation/auth";
 import { fetchJson } from "@/components/providers";
-import { applyServerErrors, FormAlert, TextField } from "./form-parts";
+import { applyServerErrors, FormAlert, TextField, useHydrated } from "./form-parts";
 
 export interface SignInFormProps {
   callbackUrl: string;
@@ -29,6 +29,7 @@ export function SignInForm({ callbackUrl, initialEmail = "", initialError }: Sig
   const [formError, setFormError] = useState<string | null>(describeSignInError(initialError));
   const form = useForm({ resolver: zodResolver(signInSchema), defaultValues: { email: initialEmail, password: "" }, mode: "onTouched" });
   const { errors, isSubmitting } = form.formState;
+  const hydrated = useHydrated();
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
@@ -43,14 +44,14 @@ export function SignInForm({ callbackUrl, initialEmail = "", initialError }: Sig
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="panel space-y-4" aria-labelledby="password-heading">
+    <form method="post" onSubmit={onSubmit} noValidate className="panel space-y-4" aria-labelledby="password-heading">
       <h2 id="password-heading" className="text-base font-semibold text-ink-900">
         With your password
       </h2>
       {formError ? <FormAlert>{formError}</FormAlert> : null}
       <TextField label="E-mail" type="email" autoComplete="email" autoFocus error={errors.email?.message} {...form.register("email")} />
       <TextField label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...form.register("password")} />
-      <button type="submit" className="btn-primary w-full justify-center" disabled={isSubmitting}>
+      <button type="submit" className="btn-primary w-full justify-center" disabled={!hydrated || isSubmitting}>
         {isSubmitting ? "Signing in…" : "Sign in"}
       </button>
     </form>
@@ -67,6 +68,7 @@ export function EmailLinkForm({ callbackUrl }: EmailLinkFormProps) {
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm({ resolver: zodResolver(emailLinkRequestSchema), defaultValues: { email: "", callbackUrl }, mode: "onTouched" });
   const { errors, isSubmitting } = form.formState;
+  const hydrated = useHydrated();
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
@@ -79,7 +81,7 @@ export function EmailLinkForm({ callbackUrl }: EmailLinkFormProps) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="panel space-y-4" aria-labelledby="link-heading">
+    <form method="post" onSubmit={onSubmit} noValidate className="panel space-y-4" aria-labelledby="link-heading">
       <div>
         <h2 id="link-heading" className="text-base font-semibold text-ink-900">
           With a one-time link
@@ -88,7 +90,7 @@ export function EmailLinkForm({ callbackUrl }: EmailLinkFormProps) {
       </div>
       {formError ? <FormAlert>{formError}</FormAlert> : null}
       <TextField label="E-mail for the link" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
-      <button type="submit" className="btn-quiet w-full justify-center" disabled={isSubmitting}>
+      <button type="submit" className="btn-quiet w-full justify-center" disabled={!hydrated || isSubmitting}>
         {isSubmitting ? "Sending…" : "E-mail me a link"}
       </button>
     </form>

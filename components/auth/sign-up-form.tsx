@@ -7,7 +7,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { signUpSchema } from "@/lib/validation/auth";
 import { PASSWORD_MIN_LENGTH } from "@/lib/auth/password-policy";
 import { fetchJson } from "@/components/providers";
-import { applyServerErrors, FormAlert, TextField } from "./form-parts";
+import { applyServerErrors, FormAlert, TextField, useHydrated } from "./form-parts";
 
 export interface SignUpFormProps {
   callbackUrl: string;
@@ -18,6 +18,7 @@ export function SignUpForm({ callbackUrl }: SignUpFormProps) {
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm({ resolver: zodResolver(signUpSchema), defaultValues: { name: "", email: "", password: "" }, mode: "onTouched" });
   const { errors, isSubmitting } = form.formState;
+  const hydrated = useHydrated();
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
@@ -37,7 +38,7 @@ export function SignUpForm({ callbackUrl }: SignUpFormProps) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="panel space-y-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="panel space-y-4">
       {formError ? <FormAlert>{formError}</FormAlert> : null}
       <TextField label="Your name" autoComplete="name" autoFocus error={errors.name?.message} {...form.register("name")} />
       <TextField label="Work e-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
@@ -49,7 +50,7 @@ export function SignUpForm({ callbackUrl }: SignUpFormProps) {
         error={errors.password?.message}
         {...form.register("password")}
       />
-      <button type="submit" className="btn-primary w-full justify-center" disabled={isSubmitting}>
+      <button type="submit" className="btn-primary w-full justify-center" disabled={!hydrated || isSubmitting}>
         {isSubmitting ? "Creating your account…" : "Create account"}
       </button>
     </form>

@@ -6,7 +6,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { invitationCreateSchema, type InvitationCreateInput } from "@/lib/validation/members";
 import { ROLES, type Role } from "@/lib/permissions";
 import { fetchJson } from "@/components/providers";
-import { applyServerErrors, FormAlert, SelectField, TextField } from "@/components/auth/form-parts";
+import { applyServerErrors, FormAlert, SelectField, TextField, useHydrated } from "@/components/auth/form-parts";
 
 export interface InvitationsPanelProps {
   workspaceId: string;
@@ -35,6 +35,7 @@ export function InvitationsPanel({ workspaceId }: InvitationsPanelProps) {
     mode: "onTouched",
   });
   const { errors, isSubmitting } = form.formState;
+  const hydrated = useHydrated();
 
   const invitations = useQuery({
     queryKey: invitationsKey(workspaceId),
@@ -67,10 +68,10 @@ export function InvitationsPanel({ workspaceId }: InvitationsPanelProps) {
         </h2>
         <p className="mt-1 text-sm text-ink-500">They get an e-mail with a link that works once, for 7 days.</p>
       </div>
-      <form onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-[1fr_11rem_auto] sm:items-start">
+      <form method="post" onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-[1fr_11rem_auto] sm:items-start">
         <TextField label="E-mail" type="email" autoComplete="off" error={errors.email?.message} {...form.register("email")} />
         <SelectField label="Role" options={roleOptions} error={errors.role?.message} {...form.register("role")} />
-        <button type="submit" className="btn-primary sm:mt-6" disabled={isSubmitting}>
+        <button type="submit" className="btn-primary sm:mt-6" disabled={!hydrated || isSubmitting}>
           {isSubmitting ? "Sending…" : "Send invitation"}
         </button>
       </form>

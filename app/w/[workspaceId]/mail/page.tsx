@@ -3,6 +3,7 @@ import { notFound } from "next/navigation";
 import { CapturedMail } from "@/components/members/captured-mail";
 import { requireWorkspaceMember } from "@/lib/auth/page-access";
 import { roleAllows } from "@/lib/permissions";
+import { withArticle } from "@/components/members/role-text";
 import { capturedMailVisible } from "@/lib/mail";
 
 export const metadata: Metadata = { title: "Mail" };
@@ -20,8 +21,7 @@ export default async function MailPage({ params }: MailPageProps) {
   if (!roleAllows(access.role, "readCapturedMail")) {
     return (
       <div className="panel max-w-xl text-sm text-ink-700">
-        Only the workspace&apos;s owners read its outgoing mail. You are {access.role === "engineer" || access.role === "estimator" ? "an" : "a"}{" "}
-        {access.role} here.
+        Only the workspace&apos;s owners read its outgoing mail. You are {withArticle(access.role)} here.
       </div>
     );
   }

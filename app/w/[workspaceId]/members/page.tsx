@@ -3,6 +3,7 @@ import { MembersTable } from "@/components/members/members-table";
 import { InvitationsPanel } from "@/components/members/invite-form";
 import { requireWorkspaceMember } from "@/lib/auth/page-access";
 import { roleAllows } from "@/lib/permissions";
+import { withArticle } from "@/components/members/role-text";
 
 export const metadata: Metadata = { title: "Members" };
 export const dynamic = "force-dynamic";
@@ -22,7 +23,7 @@ export default async function MembersPage({ params }: MembersPageProps) {
         <p className="mt-1 text-sm text-ink-500">
           {canManage
             ? "Owners change roles and remove members. Every workspace keeps at least one owner."
-            : `You are ${access.role === "engineer" ? "an" : "a"} ${access.role} here; only owners change roles or invite people.`}
+            : `You are ${withArticle(access.role)} here; only owners change roles or invite people.`}
         </p>
       </div>
       <MembersTable workspaceId={access.workspaceId} canManage={canManage} meId={access.user.id} />
