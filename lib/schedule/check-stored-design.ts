@@ -16,6 +16,8 @@ import {
   type CheckInput,
   type CheckOutput,
   type CostBreakdown,
+  type CostLine,
+  type DetailingResult,
   type EiOption,
   type Quantities,
   type ResolvedSection,
@@ -31,7 +33,9 @@ export interface StoredDesignCheck {
   /** the full member check; null without load combinations or for an invalid design */
   output: CheckOutput | null;
   quantities: Quantities | null;
-  cost: { total: number; breakdown: CostBreakdown } | null;
+  /** detailing rules of the section (available without loads too) */
+  detailing: DetailingResult[] | null;
+  cost: { total: number; breakdown: CostBreakdown; lines: CostLine[] } | null;
   /** why there is no verdict (no loads, invalid stored design, missing price), else null */
   problem: string | null;
 }
@@ -49,25 +53,25 @@ export function checkStoredDesign(inputs: MarkInputs): StoredDesignCheck {
   try {
     section = resolveSection(input.section);
   } catch (error) {
-    return { design, input, section: null, output: null, quantities: null, cost: null, problem: `the stored design is not a valid section: ${messageOf(error)}` };
+    return { design, input, section: null, output: null, quantities: null, detailing: null, cost: null, problem: `the stored design is not a valid section: ${messageOf(error)}` };
   }
   if (input.loads.length === 0) {
     // quantities and cost do not depend on the loads: still schedule them
     try {
-      const { crossTies } = checkDetailing(section, input.options ?? {});
+      const { rules, crossTies } = checkDetailing(section, input.options ?? {});
       const q = computeQuantities(section, input.member, crossTies);
       const quantities: Quantities = { concreteYd3: q.concreteYd3, steelLb: q.steelLb, formFt2: q.formFt2, ties: q.ties, crossTies: q.crossTies };
       const cost = input.prices ? computeCost(q, section.fc, design.braceLevels, input.prices) : null;
-      return { design, input, section, output: null, quantities, cost, problem: "no load combinations: add them to check this mark" };
+      return { design, input, section, output: null, quantities, detailing: rules, cost, problem: "no load combinations: add them to check this mark" };
     } catch (error) {
-      return { design, input, section, output: null, quantities: null, cost: null, problem: messageOf(error) };
+      return { design, input, section, output: null, quantities: null, detailing: null, cost: null, problem: messageOf(error) };
     }
   }
   try {
     const output = checkMember(input);
-    return { design, input, section, output, quantities: output.quantities, cost: output.cost ?? null, problem: null };
+    return { design, input, section, output, quantities: output.quantities, detailing: output.section.detailing, cost: output.cost ?? null, problem: null };
   } catch (error) {
-    return { design, input, section, output: null, quantities: null, cost: null, problem: `the check could not run: ${messageOf(error)}` };
+    return { design, input, section, output: null, quantities: null, detailing: null, cost: null, problem: `the check could not run: ${messageOf(error)}` };
   }
 }
 

@@ -121,6 +121,6 @@ export function scheduleToCsv(schedule: Schedule): string {
 
 /** File name for the download: "{project}-column-schedule.csv", reduced to safe characters. */
 export function scheduleFileName(projectName: string): string {
-  const base = projectName.normalize("NFKD").replace(/[^\w.-]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 80) || "project";
+  const base = projectName.normalize("NFKD").replace(/[^\w.-]+/g, "-").replace(/-+/g, "-").replace(/^-+|-+$/g, "").slice(0, 80) || "project";
   return `${base}-column-schedule.csv`;
 }
