@@ -67,7 +67,9 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   st.degenerate = false;
   st.lastAlpha = Number.NaN;
   st.mScale = 1e-12 * k.P0 * Math.max(k.section.b, k.section.h);
-  const tol = 1e-9;
+  // |Δθ| ≤ 1e-8 rad: the capacity changes by the same relative amount, far below any
+  // tolerance a check uses, and it saves an iteration or two
+  const tol = 1e-8;
   // first guess from the last solution's tan α / tan θ (elastic Igx/Igy at first: the
   // elastic neutral axis of a moment at θ has tan α = tan θ · Ix/Iy)
   let a = Math.atan2(k.tanRatio * Math.sin(theta), Math.cos(theta));
@@ -75,30 +77,50 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   let alpha = a;
   let found = Math.abs(fa) <= tol || st.degenerate;
   if (!found) {
-    // first step with the slope dθ/dα seen last time on this section (1 for a circle)
+    // secant steps, kept inside a bracket once one is known (bisection when a step
+    // leaves it); the first step uses the slope dθ/dα seen last time on this section
     let b = a + clampStep(-fa / k.alphaSlope);
     let fb = errAt(b);
-    found = Math.abs(fb) <= tol;
-    alpha = b;
-    for (let iter = 0; iter < 40 && !found && !st.degenerate; iter++) {
-      if (fa < 0 !== fb < 0 && Math.abs(b - a) < Math.PI) {
-        // bracketed: Brent on α (the error is continuous away from the ±π wrap)
-        alpha = findRoot(errAt, a, b, fa, fb, 1e-13, tol);
-        // a sign change can also be the ±π wrap of the error (a direction the contour
-        // does not reach): accept only a genuine root
-        found = Math.abs(errAt(alpha)) <= 1e-6;
+    let lo = Number.NaN;
+    let flo = 0;
+    let hi = Number.NaN;
+    let fhi = 0;
+    for (let iter = 0; iter < 60 && !st.degenerate; iter++) {
+      alpha = b;
+      if (Math.abs(fb) <= tol) {
+        found = true;
         break;
       }
+      if (Number.isNaN(lo)) {
+        if (fa < 0 !== fb < 0 && Math.abs(b - a) < Math.PI / 2) {
+          lo = Math.min(a, b);
+          hi = Math.max(a, b);
+          flo = lo === a ? fa : fb;
+          fhi = hi === a ? fa : fb;
+        }
+      } else if (fb < 0 === flo < 0) {
+        lo = b;
+        flo = fb;
+      } else {
+        hi = b;
+        fhi = fb;
+      }
+      // a bracket that shrinks to nothing without a small error is the ±π wrap of the
+      // error (a direction the contour does not reach), not a root
+      if (!Number.isNaN(lo) && hi - lo < 1e-12) break;
       const slope = (fb - fa) / (b - a);
       if (slope > 0.05 && slope < 20) k.alphaSlope = slope;
       let next = b - fb / slope;
-      if (!Number.isFinite(next) || Math.abs(next - b) > Math.PI / 4) next = b + clampStep(-fb);
+      if (!Number.isNaN(lo)) {
+        if (!(next > lo && next < hi)) next = flo !== fhi ? lo - (flo * (hi - lo)) / (fhi - flo) : (lo + hi) / 2;
+        if (!(next > lo && next < hi) || iter > 12) next = (lo + hi) / 2;
+      } else if (!Number.isFinite(next) || Math.abs(next - b) > Math.PI / 4) {
+        next = b + clampStep(-fb);
+      }
       a = b;
       fa = fb;
       b = next;
       fb = errAt(b);
-      alpha = b;
-      if (Math.abs(fb) <= tol) found = true;
     }
   }
   if (!found && !st.degenerate) return scanAngles(k, Pu, theta, tol);
@@ -165,7 +187,7 @@ function errAt(alpha: number): number {
   const k = st.k as Kernel;
   const dir = k.scratchDir;
   setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
-  solveSingle(k, dir, st.Pu, st.guess, root, 1e-10);
+  solveSingle(k, dir, st.Pu, st.guess, root, 1e-9);
   st.guess = root.c;
   st.lastAlpha = alpha;
   if (Math.hypot(root.Mx, root.My) <= st.mScale) {
