@@ -29,7 +29,7 @@ function wrapAngle(a: number): number {
  * `thetaRad` = atan2(My, Mx): measured from the +Mx axis toward +My (θ = 0 is pure Mx
  * compressing the +y face; θ = π/2 pure My compressing the +x face). For each trial
  * neutral-axis angle α (compression side u = (sin α, cos α)) the depth c is solved for
- * φPn(c) = Pu; α is iterated (secant, then Brent once bracketed, |Δθ| ≤ 1e-9 rad)
+ * φPn(c) = Pu; α is iterated (secant steps, bisection-safeguarded once bracketed, |Δθ| ≤ 1e-11 rad)
  * until the nominal moment vector (Mnx, Mny) points along θ. At the final α every
  * root in c is examined and the smallest capacity governs (§7.6). The capacity is the
  * magnitude φ √(Mnx² + Mny²). If the local iteration fails, α is scanned round the full
@@ -67,9 +67,9 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   st.degenerate = false;
   st.lastAlpha = Number.NaN;
   st.mScale = 1e-12 * k.P0 * Math.max(k.section.b, k.section.h);
-  // |Δθ| ≤ 1e-8 rad: the capacity changes by the same relative amount, far below any
-  // tolerance a check uses, and it saves an iteration or two
-  const tol = 1e-8;
+  // |Δθ| ≤ 1e-11 rad, and c solved to 1e-11 P0 at every step: tight enough that the
+  // result does not depend on the warm-start state left by earlier calls (beyond ~1e-11)
+  const tol = 1e-11;
   // first guess from the last solution's tan α / tan θ (elastic Igx/Igy at first: the
   // elastic neutral axis of a moment at θ has tan α = tan θ · Ix/Iy)
   let a = Math.atan2(k.tanRatio * Math.sin(theta), Math.cos(theta));
@@ -187,7 +187,7 @@ function errAt(alpha: number): number {
   const k = st.k as Kernel;
   const dir = k.scratchDir;
   setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
-  solveSingle(k, dir, st.Pu, st.guess, root, 1e-9);
+  solveSingle(k, dir, st.Pu, st.guess, root);
   st.guess = root.c;
   st.lastAlpha = alpha;
   if (Math.hypot(root.Mx, root.My) <= st.mScale) {

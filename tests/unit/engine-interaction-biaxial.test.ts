@@ -131,6 +131,14 @@ describe("phiMnAtAngle — rectangular sections", () => {
     expect(Math.atan2(f.Mny, f.Mnx)).toBeCloseTo(0.2, 6);
     expect(rel(ok.phiMn, contourCapacity(W, 300, 0.2))).toBeLessThan(2e-3);
   });
+  it("does not depend on earlier calls (warm starts are only a speed aid)", () => {
+    const fresh = (Pu: number, t: number): number => phiMnAtAngle(resolveSection(base), Pu, t)?.phiMn ?? 0;
+    const warm = resolveSection(base);
+    for (let i = 0; i < 40; i++) phiMnAtAngle(warm, 100 + 20 * i, 0.05 + 0.037 * i);
+    for (const [Pu, t] of [[310, 0.4], [50, 1.3], [800, 0.9]] as const) {
+      expect(rel(phiMnAtAngle(warm, Pu, t)?.phiMn ?? 0, fresh(Pu, t))).toBeLessThan(1e-11);
+    }
+  });
   it("is null outside −0.9 Pnt … φPn,max and zero at pure tension", () => {
     expect(phiMnAtAngle(S, S.phiPnMax * 1.0001, 0.3)).toBeNull();
     expect(phiMnAtAngle(S, -0.9 * S.Pnt * 1.0001, 0.3)).toBeNull();
