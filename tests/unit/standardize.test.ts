@@ -238,6 +238,17 @@ describe("properties of the optimum", () => {
     }
   });
 
+  it("when the integer program hits its time limit the exact fallback finishes with the same optimum", () => {
+    const input = { ...inventProject({ seed: 31, marks: 20, outlinesPerMark: 25, formSetCost: 20000 }), maxOutlines: 4 };
+    const reference = standardizeProject(input, { method: "integer-program" });
+    const r = standardizeProject(input, { timeoutMs: 0.001 });
+    // this project is not settled by the bounds alone (60 outlines remain for the program)
+    expect(r.stats.method).toBe("branch-and-bound");
+    expect(r.stats.nodes).toBeGreaterThan(0);
+    expect(r.stats.optimal).toBe(true);
+    expect(r.totalCost).toBe(reference.totalCost);
+  });
+
   it("30 marks × 40 outlines: the reduced integer program and the branch and bound agree", () => {
     const input = inventProject({ seed: 30, marks: 30, outlinesPerMark: 40, formSetCost: 20000 });
     for (const N of [2, 3, 6]) {
