@@ -40,7 +40,8 @@ export function checkSpiral(section: ResolvedSection, spiralArea: number, dagg =
   const pmin: DetailingResult = { rule: "spiral-pitch-min", clause: "25.7.3.1", ok: clear >= minClear - 1e-9, value: clear, limit: minClear, unit: "in" };
   if (!pmin.ok) pmin.message = `clear spiral pitch ${formatLength(clear, units)} is less than max(1 in, 4/3 dagg) = ${formatLength(minClear, units)}: use a larger spiral bar`;
   out.push(pmin);
-  const size: DetailingResult = { rule: "spiral-size", clause: "25.7.3.2", ok: section.tie.db >= 0.375 - 1e-9, value: section.tie.db, limit: 0.375, unit: "in" };
+  // 3/8 in; the soft-metric No. 10 bar (9.5 mm = 0.374 in) is the same bar, hence the small tolerance
+  const size: DetailingResult = { rule: "spiral-size", clause: "25.7.3.2", ok: section.tie.db >= 0.375 - 0.002, value: section.tie.db, limit: 0.375, unit: "in" };
   if (!size.ok) size.message = `spiral bar diameter ${formatLength(section.tie.db, units)} is less than 3/8 in`;
   out.push(size);
   return out;

@@ -16,6 +16,7 @@ import type {
   ResolvedSection,
 } from "../types";
 import { capacityX, capacityY, createCaseScratch, evaluateCase, runAxis, type CaseScratch } from "./evaluate-case";
+import { MPA_PER_KSI } from "../units";
 import { formatForce, formatMoment, round3 } from "./format-value";
 import { prepareMember, type PreparedMember } from "./prepare-member";
 
@@ -283,7 +284,10 @@ export function checkResolved(
       notes,
     },
   };
-  if (extras.prices !== undefined) out.cost = computeCost(q, section.fc, prep.braceLevels, extras.prices);
+  if (extras.prices !== undefined) {
+    const label = prep.displayUnits === "SI" ? `${Number((section.fc * MPA_PER_KSI).toPrecision(4))} MPa` : `${section.fc} ksi`;
+    out.cost = computeCost(q, section.fc, prep.braceLevels, extras.prices, label);
+  }
   if (extras.carbon !== undefined) out.carbon = computeCarbon(q, section.fc, extras.carbon);
   return out;
 }

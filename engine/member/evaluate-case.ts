@@ -48,6 +48,8 @@ export interface CaseScratch {
   vAxis: Axis | null;
   vBiCap: number;
   vTheta: number;
+  /** moment part of the variant's utilization (before the Pu/φPn,max term), for tie-breaking */
+  vRatio: number;
   /** segment whose values the chains hold (−1: none for this case) */
   chainSegment: number;
   /** one-entry cache of the last biaxial capacity: Mcy/Mcx and Pu */
@@ -77,6 +79,7 @@ export function createCaseScratch(): CaseScratch {
     vAxis: null,
     vBiCap: NaN,
     vTheta: NaN,
+    vRatio: 0,
     vThetaKey: NaN,
     lastAngleCap: NaN,
     chainSegment: -1,
@@ -229,11 +232,13 @@ function variantUtilization(
     ratio = rx > ry ? rx : ry;
   }
   s.vFail = "none";
+  s.vRatio = ratio;
   return ratio > axial ? ratio : axial;
 }
 
 function fail(s: CaseScratch, f: Failure, axis: Axis | null): number {
   s.vFail = f;
+  s.vRatio = Infinity;
   s.vAxis = axis;
   return Infinity;
 }
@@ -271,6 +276,8 @@ export function evaluateCase(prep: PreparedMember, load: LoadCase, s: CaseScratc
   let best = -Infinity;
   let bestFail: Failure = "none";
   let bestAxis: Axis | null = null;
+  // ties (e.g. Pu/φPn,max governing every segment) go to the larger moment ratio
+  let bestRatio = -Infinity;
   for (let seg = 0; seg < prep.segments; seg++) {
     const okX = runAxis(prep, prep.x, prep.swayX, load.Mx, Pu, load.betaDns, seg, s.seg, s.chainX);
     const okY = runAxis(prep, prep.y, prep.swayY, load.My, Pu, load.betaDns, seg, s.seg, s.chainY);
@@ -287,8 +294,9 @@ export function evaluateCase(prep: PreparedMember, load: LoadCase, s: CaseScratc
     const cy = s.chainY;
     if (!cx.needsMinimum && !cy.needsMinimum) {
       const u = variantUtilization(prep, s, cx.given, cy.given, cx.slender, cy.slender, Pu, axial);
-      if (u > best) {
+      if (u > best || (u === best && s.vRatio > bestRatio)) {
         take(s, seg, "given");
+        bestRatio = s.vRatio;
         best = u;
         bestFail = s.vFail;
         bestAxis = s.vAxis;
@@ -296,8 +304,9 @@ export function evaluateCase(prep: PreparedMember, load: LoadCase, s: CaseScratc
     } else {
       if (cx.needsMinimum) {
         const u = variantUtilization(prep, s, cx.raised, cy.given, true, cy.slender, Pu, axial);
-        if (u > best) {
+        if (u > best || (u === best && s.vRatio > bestRatio)) {
           take(s, seg, "raise-x");
+          bestRatio = s.vRatio;
           best = u;
           bestFail = s.vFail;
           bestAxis = s.vAxis;
@@ -305,8 +314,9 @@ export function evaluateCase(prep: PreparedMember, load: LoadCase, s: CaseScratc
       }
       if (cy.needsMinimum) {
         const u = variantUtilization(prep, s, cx.given, cy.raised, cx.slender, true, Pu, axial);
-        if (u > best) {
+        if (u > best || (u === best && s.vRatio > bestRatio)) {
           take(s, seg, "raise-y");
+          bestRatio = s.vRatio;
           best = u;
           bestFail = s.vFail;
           bestAxis = s.vAxis;

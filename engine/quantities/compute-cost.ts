@@ -26,6 +26,7 @@ export function lookupByStrength(table: Record<string, number>, fc: number, what
  * @param fc f'c, ksi (selects the concrete price)
  * @param braceLevels intermediate brace levels
  * @param prices price book
+ * @param strengthLabel how f'c is named in the line item (default "<fc> ksi")
  * @example computeCost(q, 5, 0, prices).total
  */
 export function computeCost(
@@ -33,12 +34,13 @@ export function computeCost(
   fc: number,
   braceLevels: number,
   prices: Prices,
+  strengthLabel = `${fc} ksi`,
 ): { total: number; breakdown: CostBreakdown; lines: CostLine[] } {
   const lines: CostLine[] = [];
   const add = (category: CostLine["category"], item: string, quantity: number, unit: string, unitPrice: number) => {
     lines.push({ category, item, quantity, unit, unitPrice, amount: quantity * unitPrice });
   };
-  add("concrete", `concrete f'c = ${fc} ksi, in place`, q.concreteYd3, "yd3", lookupByStrength(prices.concrete, fc, "prices.concrete"));
+  add("concrete", `concrete f'c = ${strengthLabel}, in place`, q.concreteYd3, "yd3", lookupByStrength(prices.concrete, fc, "prices.concrete"));
   add("steel", "longitudinal bars incl. compression laps", q.longitudinalLb, "lb", prices.steel);
   add("steel", "ties or spiral", q.tieLb, "lb", prices.steel);
   if (q.crossTieLb > 0) add("steel", "cross-ties", q.crossTieLb, "lb", prices.steel);

@@ -88,7 +88,8 @@ describe("checkMember: both axes, M2,min one axis at a time (column-checks.md §
     expect(c.utilization!).toBeCloseTo(Math.max(vX, vY, 300 / sec.phiPnMax), 6);
     // the reported variant is one of the two, with its own biaxial ratio
     expect(c.biaxial!.ratio).toBeCloseTo(c.m2min === "x" ? vX : vY, 6);
-    if (Math.max(vX, vY) > 300 / sec.phiPnMax) expect(c.m2min).toBe(vX >= vY ? "x" : "y");
+    // the larger moment ratio is reported, also when Pu/φPn,max ties both variants
+    expect(c.m2min).toBe(vX >= vY ? "x" : "y");
     expect(c.reasons.some((t) => t.includes("M2,min"))).toBe(true);
   });
 });
@@ -201,6 +202,12 @@ describe("checkMember: brace levels, transverse load, lux / luy", () => {
     const r2 = checkMember({ section: RECT, member: { ...BRACED, transverseLoad: { y: true } }, loads: [L({ My: { M1: 300, M2: 900, curvature: "double" } })] });
     expect(r2.cases[0]!.x.Cm).toBeCloseTo(0.6 + 0.4 * (600 / 1400), 12);
     expect(r2.cases[0]!.y.Cm).toBe(1);
+  });
+
+  it("when Pu/φPn,max governs every segment, the segment with the larger moment ratio is reported", () => {
+    const c = checkMember({ section: RECT, member: { lu: 120, kx: 1, ky: 1, braced: true, braceLevels: 1 }, loads: [L({ Pu: 900, Mx: { M1: 50, M2: 150, curvature: "single" } })] }).cases[0]!;
+    expect(c.utilization!).toBeCloseTo(900 / resolveSection(RECT).phiPnMax, 12);
+    expect(c.segment).toBe(1);
   });
 
   it("lux / luy replace ℓu for their axis", () => {

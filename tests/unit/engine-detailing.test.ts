@@ -170,6 +170,10 @@ describe("checkSpiral (25.7.3)", () => {
     expect(rules.map((r) => r.rule)).toEqual(["spiral-ratio", "spiral-pitch-max", "spiral-pitch-min", "spiral-size"]);
     expect(rules[0]!.ok).toBe(true);
   });
+  it("the soft-metric No. 10 spiral (9.5 mm) is the 3/8 in bar (25.7.3.2)", () => {
+    const m = resolveSection({ shape: "circle", D: 20, fc: 5, fy: 60, confinement: "spiral", cover: 1.5, layout: { type: "circle", size: "25", n: 8 }, tie: { size: "10", spacing: 2 } });
+    expect(checkSpiral(m, 71 / 645.16, 0.75).find((r) => r.rule === "spiral-size")!.ok).toBe(true);
+  });
   it("a given pitch that is too open fails the ratio and the 3 in clear limit", () => {
     const open = resolveSection({ shape: "circle", D: 20, fc: 5, fy: 60, confinement: "spiral", cover: 1.5, layout: { type: "circle", size: "#8", n: 8 }, tie: { size: "#3", spacing: 4 } });
     const rules = checkSpiral(open, 0.11, 0.75);
