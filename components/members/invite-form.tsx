@@ -44,7 +44,7 @@ export function InvitationsPanel({ workspaceId }: InvitationsPanelProps) {
 
   const revoke = useMutation({
     mutationFn: (id: string) => fetchJson(`/api/workspaces/${workspaceId}/invitations/${id}`, { method: "DELETE" }),
-    onSettled: () => queryClient.invalidateQueries({ queryKey: invitationsKey(workspaceId) }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ["workspaces", workspaceId] }),
   });
 
   const onSubmit = form.handleSubmit(async (values) => {
@@ -54,7 +54,7 @@ export function InvitationsPanel({ workspaceId }: InvitationsPanelProps) {
       const res = await fetchJson<{ mail: { status: string } }>(`/api/workspaces/${workspaceId}/invitations`, { body: values });
       setSent({ email: values.email.trim().toLowerCase(), mailStatus: res.mail.status });
       form.reset({ email: "", role: values.role });
-      await queryClient.invalidateQueries({ queryKey: invitationsKey(workspaceId) });
+      await queryClient.invalidateQueries({ queryKey: ["workspaces", workspaceId] });
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, ["email", "role"]));
     }

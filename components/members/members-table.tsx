@@ -66,7 +66,7 @@ export function MembersTable({ workspaceId, canManage, meId }: MembersTableProps
       if (v.member.userId === meId) router.refresh();
     },
     onError: (error, v) => setError(v.member.id, error instanceof ApiError && error.issues[0] ? error.issues[0].message : (error as Error).message),
-    onSettled: () => queryClient.invalidateQueries({ queryKey: membersQueryKey(workspaceId) }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ["workspaces", workspaceId] }),
   });
 
   const remove = useMutation({
@@ -84,7 +84,7 @@ export function MembersTable({ workspaceId, canManage, meId }: MembersTableProps
       setConfirming(null);
       setError(member.id, (error as Error).message);
     },
-    onSettled: () => queryClient.invalidateQueries({ queryKey: membersQueryKey(workspaceId) }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ["workspaces", workspaceId] }),
   });
 
   const columns = useMemo(

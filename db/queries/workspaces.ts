@@ -1,6 +1,6 @@
-import { eq } from "drizzle-orm";
+import { desc, eq } from "drizzle-orm";
 import { getDb } from "../client";
-import { memberships, workspaces } from "../schema";
+import { auditLog, memberships, users, workspaces } from "../schema";
 import { recordAudit } from "@/lib/audit";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { randomBytes } from "node:crypto";
@@ -43,4 +43,26 @@ export async function getWorkspace(workspaceId: string) {
     .from(workspaces)
     .where(eq(workspaces.id, workspaceId));
   return row ?? null;
+}
+
+/** The newest changes in a workspace: who, what, when, before and after. */
+export async function listAuditEntries(workspaceId: string, limit = 200) {
+  const rows = await getDb()
+    .select({
+      id: auditLog.id,
+      action: auditLog.action,
+      entity: auditLog.entity,
+      entityId: auditLog.entityId,
+      before: auditLog.before,
+      after: auditLog.after,
+      at: auditLog.at,
+      userName: users.name,
+      userEmail: users.email,
+    })
+    .from(auditLog)
+    .leftJoin(users, eq(users.id, auditLog.userId))
+    .where(eq(auditLog.workspaceId, workspaceId))
+    .orderBy(desc(auditLog.at))
+    .limit(limit);
+  return rows.map((r) => ({ ...r, at: r.at.toISOString() }));
 }

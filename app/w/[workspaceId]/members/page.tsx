@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { MembersTable } from "@/components/members/members-table";
 import { InvitationsPanel } from "@/components/members/invite-form";
+import { RecentChanges } from "@/components/members/recent-changes";
 import { requireWorkspaceMember } from "@/lib/auth/page-access";
 import { roleAllows } from "@/lib/permissions";
 import { withArticle } from "@/components/members/role-text";
@@ -28,6 +29,7 @@ export default async function MembersPage({ params }: MembersPageProps) {
       </div>
       <MembersTable workspaceId={access.workspaceId} canManage={canManage} meId={access.user.id} />
       {canManage ? <InvitationsPanel workspaceId={access.workspaceId} /> : null}
+      {canManage ? <RecentChanges workspaceId={access.workspaceId} /> : null}
     </div>
   );
 }
