@@ -1,7 +1,8 @@
 import type { MomentCapacity, ResolvedSection } from "../types";
 import { findRoot } from "./find-root";
 import {
-  PHI_TENSION, axialInRange, evaluate, kernelOf, newRoot, setDirection, solveMulti, solveSingle, type Kernel,
+  PHI_TENSION, axialInRange, evaluate, kernelOf, newRoot, phiPnAt, setDirection, solveC, solveMulti, solveSingle,
+  type Kernel,
 } from "./section-kernel";
 import { snapUnit } from "./section-forces-at";
 import { phiOf } from "./phi-factor";
@@ -132,15 +133,107 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   return capacityAtAlpha(k, Pu, theta, alpha, st.lastAlpha === alpha ? st.guess : Number.NaN);
 }
 
-/** Final step at a converged α: every root in c, the smallest capacity along θ governs. */
+/**
+ * Final step at a converged α: every root in c, the smallest capacity along θ governs.
+ * When the smallest root at α is not the one the iteration followed (a displaced-concrete
+ * step gives several roots), its moment points slightly off θ: that branch is followed in
+ * α on its own (between the same two steps) until it points along θ, and the smaller of
+ * the two capacities governs (§7.6).
+ */
 function capacityAtAlpha(k: Kernel, Pu: number, theta: number, alpha: number, known: number): BiaxialCapacity {
   const dir = k.scratchDir;
   setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
   solveMulti(k, dir, Pu, Math.cos(theta), Math.sin(theta), root, known);
   if (Number.isNaN(root.c)) solveSingle(k, dir, Pu, 0, root);
+  const main = capacityOf(k, alpha);
+  if (Number.isNaN(known) || Math.abs(root.c - known) <= 1e-9 * dir.cP0) return main;
+  // the iteration's own root at α points along θ
+  const other = main;
+  evaluate(k, dir, known, forcesOut);
+  const MnKnown = Math.hypot(forcesOut[1] as number, forcesOut[2] as number);
+  const phiKnown = phiOf(forcesOut[3] as number, k.epsTy, k.phiC);
+  const followed: BiaxialCapacity = {
+    phiMn: phiKnown * MnKnown, Mn: MnKnown, phi: phiKnown, c: known, epsT: forcesOut[3] as number, alpha: wrapAngle(alpha),
+  };
+  const branch = trackBranch(k, Pu, theta, alpha, other.c);
+  return branch !== null && branch.phiMn < followed.phiMn ? branch : followed;
+}
+
+const forcesOut = new Float64Array(4);
+
+function capacityOf(k: Kernel, alpha: number): BiaxialCapacity {
   const Mn = Math.hypot(root.Mx, root.My);
   const phi = phiOf(root.epsT, k.epsTy, k.phiC);
   return { phiMn: phi * Mn, Mn, phi, c: root.c, epsT: root.epsT, alpha: wrapAngle(alpha) };
+}
+
+/** Branch of roots between two fixed displaced-concrete steps (bar indices, −1 = none). */
+const br = { lo: -1, hi: -1, Pu: 0, theta: 0 };
+
+function branchErr(alpha: number): number {
+  const k = st.k as Kernel;
+  const dir = k.scratchDir;
+  setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
+  const lo = br.lo >= 0 ? ((dir.d[br.lo] as number) / k.beta1) * (1 + 1e-10) : 0;
+  const hi = br.hi >= 0 ? ((dir.d[br.hi] as number) / k.beta1) * (1 - 1e-10) : dir.cP0;
+  if (!(lo < hi)) return Number.NaN;
+  const flo = phiPnAt(k, dir, lo) - br.Pu;
+  const fhi = phiPnAt(k, dir, hi) - br.Pu;
+  if (flo < 0 === fhi < 0) return Number.NaN;
+  const c = solveC(k, dir, br.Pu, lo, flo, hi, fhi);
+  evaluate(k, dir, c, forcesOut);
+  root.c = c;
+  root.Pn = forcesOut[0] as number;
+  root.Mx = forcesOut[1] as number;
+  root.My = forcesOut[2] as number;
+  root.epsT = forcesOut[3] as number;
+  return wrapAngle(Math.atan2(root.My, root.Mx) - br.theta);
+}
+
+/** Follow the root branch containing depth c0 at α0 until its moment points along θ. */
+function trackBranch(k: Kernel, Pu: number, theta: number, alpha0: number, c0: number): BiaxialCapacity | null {
+  const dir = k.scratchDir;
+  setDirection(k, snapUnit(Math.sin(alpha0)), snapUnit(Math.cos(alpha0)), dir);
+  let lo = -1;
+  let hi = -1;
+  let cLo = 0;
+  let cHi = Number.POSITIVE_INFINITY;
+  for (let i = 0; i < k.n; i++) {
+    const di = dir.d[i] as number;
+    if (!(di > 0 && di < dir.depth)) continue;
+    const cj = di / k.beta1;
+    if (cj < c0 && cj > cLo) {
+      cLo = cj;
+      lo = i;
+    } else if (cj > c0 && cj < cHi) {
+      cHi = cj;
+      hi = i;
+    }
+  }
+  br.lo = lo;
+  br.hi = hi;
+  br.Pu = Pu;
+  br.theta = theta;
+  let a = alpha0;
+  let fa = branchErr(a);
+  if (Number.isNaN(fa)) return null;
+  let b = a - fa / k.alphaSlope;
+  let fb = branchErr(b);
+  for (let iter = 0; iter < 30; iter++) {
+    if (Number.isNaN(fb)) return null;
+    if (Math.abs(fb) <= 1e-11) {
+      const Mn = Math.hypot(root.Mx, root.My);
+      const phi = phiOf(root.epsT, k.epsTy, k.phiC);
+      return { phiMn: phi * Mn, Mn, phi, c: root.c, epsT: root.epsT, alpha: wrapAngle(b) };
+    }
+    const slope = (fb - fa) / (b - a);
+    if (!(slope > 0.01) || !Number.isFinite(slope)) return null;
+    a = b;
+    fa = fb;
+    b = b - fb / slope;
+    fb = branchErr(b);
+  }
+  return null;
 }
 
 /**
