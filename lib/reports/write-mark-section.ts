@@ -367,7 +367,7 @@ function writeVerdict(doc: Doc, { inputs, check, approved }: MarkReport): void {
   } else if (out.pass) {
     write(
       doc,
-      `PASSES. The design of column mark ${label} satisfies ${CODE_EDITION} for all ${out.cases.length} load combination${out.cases.length === 1 ? "" : "s"} with second-order (slenderness) effects included. The largest utilization is ${num(out.utilization, 3)}, under "${out.governing ?? "—"}", and every detailing check is met.`,
+      `PASSES. The design of column mark ${label} satisfies ${CODE_EDITION} for ${out.cases.length === 1 ? "its load combination" : `all ${out.cases.length} load combinations`} with second-order (slenderness) effects included. The largest utilization is ${num(out.utilization, 3)}, under "${out.governing ?? "—"}", and every detailing check is met.`,
       { font: FONT.bold, size: 10.5, color: INK.ok },
     );
   } else {
@@ -410,6 +410,9 @@ function writeAssumptions(doc: Doc, { inputs, check }: MarkReport): void {
     ["βdns", inputs.loads.length ? inputs.loads.map((l) => `${l.name}: ${num(l.betaDns, 3)}`).join("; ") : "—"],
     ["Units", "US customary: kip, in, ksi, kip-in, kip-in²"],
   ];
+  if (check.design.braceLevels > 0) {
+    pairs.push(["Intermediate bracing", `${check.design.braceLevels} brace level${check.design.braceLevels > 1 ? "s" : ""} restraining both axes, splitting l_u into ${check.design.braceLevels + 1} equal segments; each segment is checked with the end moments read off the linear first-order moment diagram. The braces themselves are not designed here.`]);
+  }
   facts(doc, pairs, { size: 8.5 });
   const notes = out?.assumptions.notes ?? [];
   for (const n of notes) write(doc, `• ${n}`, { size: 8.5 });
