@@ -183,6 +183,23 @@ describe("interactionDiagram", () => {
       expect(dy[i]?.phi).toBeCloseTo(p.phi, 12);
     });
   });
+  it("works for a spiral circle: P0 to −Pnt, φ = 0.75 on the compression side, same about x and y", () => {
+    const C = resolveSection({
+      shape: "circle", D: 20, fc: 6, fy: 60, confinement: "spiral", cover: 1.5,
+      layout: { type: "circle", size: "#8", n: 8 },
+    });
+    const dx = interactionDiagram(C, "x", 30).points;
+    const dy = interactionDiagram(C, "y", 30).points;
+    expect(dx[0]?.Pn).toBeCloseTo(C.P0, 9);
+    expect(dx[0]?.phi).toBe(0.75);
+    expect(dx.at(-1)?.Pn).toBeCloseTo(-C.Pnt, 9);
+    expect(Math.max(...dx.map((p) => p.phiPn))).toBeCloseTo(0.75 * 0.85 * C.P0, 9);
+    // 8 equally spaced bars: the layout looks the same after a quarter turn
+    dx.forEach((p, i) => {
+      expect(dy[i]?.Pn).toBeCloseTo(p.Pn, 8);
+      expect(dy[i]?.Mn).toBeCloseTo(p.Mn, 8);
+    });
+  });
   it("rejects a bad axis, point count or sense", () => {
     expect(() => interactionDiagram(S, "z" as "x")).toThrow(TypeError);
     expect(() => interactionDiagram(S, "x", 3)).toThrow(RangeError);
