@@ -64,6 +64,42 @@ test("account settings: server field errors beside the fields, a plain-text name
   await expect(page).toHaveURL(/\/w(\?|$)/);
 });
 
+test("a person in two workspaces switches between them with the workspace switcher", async ({ page }) => {
+  const email = `two-firms-${run}@e2e.test`;
+  const created = await page.request.post("/api/auth/sign-up", { data: { name: "Ola Nakamura", email, password: "two-way-slab-span-31" } });
+  expect(created.status()).toBe(201);
+  await signIn(page, email, "two-way-slab-span-31");
+  await page.getByLabel("Workspace name").fill(`Nakamura Lund ${run}`);
+  await page.getByRole("button", { name: "Create workspace" }).click();
+  await expect(page).toHaveURL(/\/w\/[0-9a-f-]{36}$/);
+  const firstId = new URL(page.url()).pathname.split("/")[2] ?? "";
+
+  const switcher = page.getByRole("combobox", { name: "Workspace" });
+  await switcher.selectOption({ label: "+ New workspace…" });
+  await expect(page.getByRole("heading", { name: "Start another workspace" })).toBeVisible();
+  await page.getByLabel("Workspace name").fill(`Nakamura Side Practice ${run}`);
+  await page.getByRole("button", { name: "Create workspace" }).click();
+  await expect(page).not.toHaveURL(new RegExp(firstId));
+  await expect(switcher.locator("option:checked")).toHaveText(`Nakamura Side Practice ${run} · owner`);
+
+  await switcher.selectOption(firstId);
+  await expect(page).toHaveURL(new RegExp(`/w/${firstId}$`));
+  await expect(switcher.locator("option:checked")).toHaveText(`Nakamura Lund ${run} · owner`);
+});
+
+test("repeated wrong passwords through the real sign-in endpoint lock the address for a while", async ({ page }) => {
+  const email = `locked-${run}@e2e.test`;
+  const created = await page.request.post("/api/auth/sign-up", { data: { name: "Lockie Park", email, password: "hollow-core-plank-77" } });
+  expect(created.status()).toBe(201);
+  for (let i = 0; i < 5; i++) {
+    await signIn(page, email, `wrong-guess-${i}-abc`);
+    await expect(page.getByRole("alert").filter({ hasText: "not right" })).toBeVisible();
+  }
+  await signIn(page, email, "hollow-core-plank-77");
+  await expect(page.getByRole("alert").filter({ hasText: "Too many failed attempts" })).toBeVisible();
+  await expect(page).toHaveURL(/\/sign-in/);
+});
+
 test("the signed-out pages fit a tablet and a laptop and every input has a label", async ({ page }) => {
   for (const width of [768, 1280]) {
     await page.setViewportSize({ width, height: 900 });
