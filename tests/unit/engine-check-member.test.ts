@@ -142,6 +142,20 @@ describe("checkMember: slenderness neglected, δ, unstable, axial limit", () => 
     expect(r.governing).toBe("U");
   });
 
+  it("zero and tension axial load: no magnification, no M2,min, capacity in tension", () => {
+    const sec = resolveSection(RECT);
+    const [zero, tension] = checkResolved(sec, BRACED, [L({ name: "z", Pu: 0 }), L({ name: "t", Pu: -100 })]).cases;
+    for (const c of [zero!, tension!]) {
+      expect(c.x.delta).toBe(1);
+      expect(c.m2min).toBeNull();
+      expect(c.x.M2).toBe(1400);
+      expect(c.utilization!).toBeCloseTo(1400 / phiMnAt(sec, "x", c.Pu)!.phiMn, 12);
+    }
+    const beyond = checkResolved(sec, BRACED, [L({ Pu: -0.9 * sec.Pnt - 1 })]).cases[0]!;
+    expect(beyond.utilization).toBeNull();
+    expect(beyond.reasons[0]).toMatch(/tension/);
+  });
+
   it("utilization = max(Pu/φPn,max, Mc/φMn(Pu)) for a uniaxial case (§5)", () => {
     const sec = resolveSection(RECT);
     const member = { lu: 216, luy: 60, kx: 1, ky: 1, braced: true }; // y not slender: uniaxial
