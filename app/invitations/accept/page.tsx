@@ -69,9 +69,9 @@ export default async function AcceptInvitationPage({ searchParams }: AcceptPageP
       <div className="space-y-3 text-sm text-ink-700">
         <p>
           The invitation was sent to <strong className="text-ink-900">{invitation.email}</strong>, but you are signed in as{" "}
-          <strong className="text-ink-900">{user.email}</strong>. Sign out, then open the link again.
+          <strong className="text-ink-900">{user.email}</strong>. Sign out, then accept with the invited address.
         </p>
-        <SignOutButton />
+        <SignOutButton callbackUrl={here} />
       </div>
     );
   } else if (invitation.accountExists) {
