@@ -107,3 +107,38 @@ describe("packages of uncommon designs", () => {
     expect(schedule.totals.grand.notPassing).toBeGreaterThanOrEqual(1);
   });
 });
+
+describe("a project with more marks than one contents page holds", () => {
+  it("runs the contents onto further pages, and every page number still points at its mark", async () => {
+    const db = testDb();
+    const workspace = await createTestWorkspace();
+    const [project] = await db.insert(projects).values({ workspaceId: workspace.id, name: `Long Row Sheds ${uniqueSuffix()}` }).returning();
+    if (!project) throw new Error("project insert failed");
+    const labels = Array.from({ length: 40 }, (_, i) => `K-${i + 1}`);
+    await db.insert(columnMarks).values(
+      labels.map((label) => ({
+        projectId: project.id,
+        label,
+        level: "G",
+        member: { lu: 120, kx: 1, ky: 1, braced: true },
+        design: { section: { shape: "rect", b: 14, h: 14, fc: 4, fy: 60, confinement: "tied", cover: 1.5, layout: { type: "perimeter", size: "#7", nb: 2, nh: 2 } }, braceLevels: 0 },
+      })),
+    );
+    const pdf = await renderProjectPackage(project.id);
+    if (!pdf) throw new Error("no package");
+    const all = await readPdfText(pdf);
+    const contentsPages = all.filter((p) => p.items[0] === "Contents (continued)" || p.items.includes("Contents"));
+    expect(contentsPages.length).toBeGreaterThanOrEqual(2);
+    const contentsItems = contentsPages.flatMap((p) => p.items);
+    for (const label of labels) {
+      const at = contentsItems.indexOf(`Column mark ${label}`);
+      expect(at).toBeGreaterThanOrEqual(0);
+      const start = all.find((p) => p.items[0] === `Column mark ${label}`)?.page;
+      expect(contentsItems[at + 5]).toBe(String(start));
+    }
+    // natural order: K-2 before K-10
+    expect(contentsItems.indexOf("Column mark K-2")).toBeLessThan(contentsItems.indexOf("Column mark K-10"));
+    const firstMarkPage = all.find((p) => p.items[0] === "Column mark K-1")?.page;
+    expect(firstMarkPage).toBe(contentsPages.length + 1);
+  }, 120_000);
+});

@@ -3,6 +3,7 @@
  * same text a reader's search or copy would find.
  */
 import path from "node:path";
+import { createRequire } from "node:module";
 import { getDocument } from "pdfjs-dist/legacy/build/pdf.mjs";
 
 export interface PdfPageText {
@@ -15,7 +16,8 @@ export interface PdfPageText {
 }
 
 export async function readPdfText(pdf: Buffer): Promise<PdfPageText[]> {
-  const standardFontDataUrl = path.join(process.cwd(), "node_modules/pdfjs-dist/standard_fonts/") ;
+  // the 14 standard fonts' metrics ship inside pdfjs-dist; found from wherever it is installed
+  const standardFontDataUrl = path.join(path.dirname(createRequire(import.meta.url).resolve("pdfjs-dist/package.json")), "standard_fonts") + path.sep;
   const doc = await getDocument({ data: new Uint8Array(pdf), standardFontDataUrl, verbosity: 0, isEvalSupported: false }).promise;
   const pages: PdfPageText[] = [];
   for (let i = 1; i <= doc.numPages; i++) {
