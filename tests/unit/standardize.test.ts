@@ -7,6 +7,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { standardizeProject, sweepOutlines, type StandardizeCandidate, type StandardizeInput, type StandardizeResult } from "../../optimizer/standardize";
+import type { FrontEntry } from "../../optimizer/front-entry";
 import { inventProject } from "../../optimizer/standardize/invent-project";
 
 type Method = "auto" | "integer-program" | "branch-and-bound";
@@ -309,12 +310,13 @@ describe("outlines", () => {
   });
 
   it("accepts optimize front entries as they are and carries them through", () => {
-    const front = [
+    // typed as the optimizer's own front entry, so a change there that breaks this shows at typecheck
+    const front: FrontEntry[] = [
       {
-        id: "r18x22-f5-y60-8#8-p3x3-b0", shape: "rect" as const, b: 18, h: 22, fc: 5, fy: 60,
+        id: "r18x22-f5-y60-8#8-p3x3-b0", shape: "rect", b: 18, h: 22, fc: 5, fy: 60, confinement: "tied",
         bars: { size: "#8", count: 8, layout: { type: "perimeter", nb: 3, nh: 3 } }, braceLevels: 0, cost: 1234.56, carbon: 800,
         costBreakdown: { concrete: 600, steel: 400, formwork: 234.56, bracing: 0 }, quantities: { concreteYd3: 2.1, steelLb: 300, formFt2: 60 },
-        utilization: 0.97, governing: "1.2D+1.6L",
+        utilization: 0.97, governing: "1.2D+1.6L", rho: 0.016,
       },
     ];
     const r = standardizeProject({ maxOutlines: 1, formSetCost: 0, marks: [{ id: "C9", label: "C9", quantity: 2, candidates: front }] });
