@@ -51,9 +51,14 @@ function MarkPageInner({ workspaceId, projectId, markId }: MarkPageProps) {
           Mark {mark.label}
           {mark.level ? <span className="font-normal text-ink-500"> · {mark.level}</span> : null}
         </h2>
-        <Link href={checkHref} className="btn-primary">
-          Check this mark
-        </Link>
+        <div className="flex gap-2">
+          <Link href={`/w/${workspaceId}/projects/${projectId}/marks/${markId}/searches`} className="btn-quiet">
+            Search alternatives
+          </Link>
+          <Link href={checkHref} className="btn-primary">
+            Check this mark
+          </Link>
+        </div>
       </div>
       <MarkForm key={mark.version} projectId={projectId} workspaceId={workspaceId} units={project.units} defaults={{ cover: project.cover }} mark={mark} canEdit={can.editMarks} onSaved={refresh} />
       <section aria-labelledby="loads-heading" className="space-y-4">
