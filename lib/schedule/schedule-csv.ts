@@ -38,6 +38,7 @@ export const SCHEDULE_CSV_HEADERS = [
   "Cost total ($)",
   "Adopted alternative",
   "Adoption stale",
+  "Carries adopted design",
   "Notes",
 ] as const;
 
@@ -81,6 +82,7 @@ function rowRecord(row: ScheduleRow): CsvRecord {
     "Cost total ($)": row.cost?.extended.total ?? "",
     "Adopted alternative": row.adoption ? row.adoption.candidateId : "",
     "Adoption stale": row.adoption ? (row.adoption.stale ? "stale" : "current") : "",
+    "Carries adopted design": row.adoption ? (row.adoption.matchesDesign ? "yes" : "no: the mark's design was changed after approval") : "",
     Notes: row.pass ? "" : row.reasons.join("; "),
   };
 }

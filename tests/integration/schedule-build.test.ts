@@ -6,7 +6,8 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import Papa from "papaparse";
-import { closeDb } from "./support/database";
+import { closeDb, testDb } from "./support/database";
+import { adoptedAlternatives } from "@/db/schema";
 import { callRoute } from "./support/session";
 import { createReportFixture, PRICES, type ReportFixture, type FixtureMark } from "./schedule-fixtures";
 import { buildSchedule, type ScheduleRow } from "@/lib/schedule/build-schedule";
@@ -149,6 +150,14 @@ describe("buildSchedule", () => {
     expect(rowOf(schedule.rows, "C-2").adoption).toBeNull();
   });
 
+  it("says when a mark no longer carries its approved alternative's design", async () => {
+    await testDb().insert(adoptedAlternatives).values({ markId: fx.marks.c9.id, candidateId: "r18x18-f4-y60-4#8-p2x2-b0", candidate: {}, status: "approved", inputsHash: "h", decidedAt: new Date() });
+    const schedule = await buildSchedule(fx.projectId);
+    const c9 = schedule ? rowOf(schedule.rows, "C-9") : null;
+    // the mark carries 16×16 in, the approval was for 18×18 in
+    expect(c9?.adoption).toMatchObject({ candidateId: "r18x18-f4-y60-4#8-p2x2-b0", matchesDesign: false, stale: true });
+  });
+
   it("returns null for an unknown project", async () => {
     expect(await buildSchedule("00000000-0000-4000-8000-000000000000")).toBeNull();
   });
@@ -175,6 +184,8 @@ describe("schedule CSV", () => {
     expect(c1["Verdict"]).toBe(row.pass ? "passes" : "FAILS");
     expect(c1["Adopted alternative"]).toBe("r18x22-f5-y60-8#8-p3x3-b0");
     expect(c1["Adoption stale"]).toBe("current");
+    expect(c1["Carries adopted design"]).toBe("yes");
+    expect(data[1]?.["Carries adopted design"]).toBe("");
     expect(data[2]?.["Adoption stale"]).toBe("stale");
     expect(data[3]?.["Verdict"]).toBe("not checked");
 
