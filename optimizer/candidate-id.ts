@@ -49,8 +49,10 @@ export function formatCandidateId(p: RectIdParts | CircleIdParts): string {
   return `c${num(p.D)}-f${num(p.fc)}-y${num(p.fy)}-${p.n}${p.size}-${conf}-b${p.braceLevels}`;
 }
 
-const RECT_ID = /^r([0-9.]+)x([0-9.]+)-f([0-9.]+)-y([0-9.]+)-(\d+)(#?\d+)-p(\d+)x(\d+)-b(\d+)$/;
-const CIRCLE_ID = /^c([0-9.]+)-f([0-9.]+)-y([0-9.]+)-(\d+)(#?\d+)-([ts])-b(\d+)$/;
+// {count}{size}: US sizes carry "#"; A615M designations are always two digits ("10"…"57"),
+// so "625" reads as 6 bars of size 25 (the contract's id has no separator there).
+const RECT_ID = /^r([0-9.]+)x([0-9.]+)-f([0-9.]+)-y([0-9.]+)-(\d+)(#\d+|\d\d)-p(\d+)x(\d+)-b(\d+)$/;
+const CIRCLE_ID = /^c([0-9.]+)-f([0-9.]+)-y([0-9.]+)-(\d+)(#\d+|\d\d)-([ts])-b(\d+)$/;
 
 /**
  * Reads an id back into its parts (the web app keeps ids of adopted alternatives).

@@ -18,7 +18,7 @@ export interface OptimizeStats {
   threads: number;
 }
 
-export interface OptimizeResult {
+export type OptimizeResult = {
   best: FrontEntry | null;
   front: FrontEntry[];
   carbonFront: FrontEntry[];
@@ -30,7 +30,7 @@ export interface OptimizeResult {
   passing: PassingSummary[];
   /** search counters beyond the contract's stats */
   counters: { caseChecks: number; outputChecks: number; visited: number; exhaustive: boolean; cancelled: boolean };
-}
+};
 
 const REGION_NAMES: Record<string, string> = {
   rect: "rectangular",

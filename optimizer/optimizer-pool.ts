@@ -12,6 +12,7 @@ import { existsSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { Piscina } from "piscina";
+import type { SearchRunner } from "../lib/jobs/process-search-job";
 import type { OptimizeResult } from "./merge-results";
 import type { SearchTask, TaskResult } from "./run-task";
 import { finish, SearchCancelledError, validateRequest, type SearchOptions, type SearchProgress } from "./run-search";
@@ -121,4 +122,9 @@ export async function runSearchOnPool(request: unknown, options: PoolSearchOptio
 export function poolSearchRunner(pool?: Piscina) {
   return (request: unknown, options: { onProgress: (p: SearchProgress) => void; signal: AbortSignal }) =>
     runSearchOnPool(request, { ...options, ...(pool ? { pool } : {}) });
+}
+
+// compile-time check: the runner fits the job processor's contract
+export function asSearchRunner(pool?: Piscina): SearchRunner {
+  return poolSearchRunner(pool);
 }

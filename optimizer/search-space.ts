@@ -37,7 +37,7 @@ import type {
   Prices,
   SectionInput,
 } from "../engine/types";
-import { DEFAULT_SPACE, type OptimizeRequest } from "../lib/validation/optimize-request";
+import { defaultSpaceFor, type OptimizeRequest } from "../lib/validation/optimize-request";
 import { formatCandidateId } from "./candidate-id";
 import { toCarbonUnits, toCents } from "./pareto-front";
 
@@ -98,6 +98,7 @@ export function buildSearchProblem(req: OptimizeRequest): SearchProblem {
   const len = (x: number) => (si ? convertLength(x, "US") : x);
   const str = (x: number) => (si ? convertStress(x, "US") : x);
   const sp = req.space ?? {};
+  const DEFAULT_SPACE = defaultSpaceFor(req.units);
   const shapes = [...new Set(sp.shapes ?? DEFAULT_SPACE.shapes)];
   const squareOnly = sp.squareOnly === true;
   const maxWidth = sp.maxWidth === undefined ? null : { v: len(sp.maxWidth), disp: sp.maxWidth };

@@ -20,7 +20,10 @@
  * No monotonicity is assumed: with the code's φ (Table 21.2.2), adding bars can lower φMn at
  * a given Pu (tension steel deepens the neutral axis and moves a section from tension-
  * controlled toward compression-controlled), so "more bars never lower capacity" is false
- * and a bisection on bar count would not be exact.
+ * and a bisection on bar count would not be exact (optimizer/README.md has a measured case).
+ *
+ * Load cases are evaluated in the request's order on a fresh section, as checkResolved does,
+ * because the engine's biaxial solver warm-starts from earlier solutions on the same section.
  */
 import { caseUtilization, prepareMember, resolveSection } from "../engine";
 import type { LoadCase, MemberInput } from "../engine/types";
@@ -108,6 +111,7 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
   let visited = 0;
   let sinceTick = 0;
   const maxPu = loads.reduce((m, l) => Math.max(m, l.Pu), -Infinity);
+  const famTally: RegionTally[] = table.families.map((fam) => (regions[regionOf(fam)] ??= newTally(nCases)));
   const members = problem.braceLevels.map((n): MemberInput => ({ ...problem.member, braceLevels: n }));
   for (let pos = opts.from; pos < opts.to; pos++) {
     if ((pos - opts.from) % 64 === 0) {
@@ -122,8 +126,7 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
     }
     const famIndex = table.family[i] as number;
     const fam = table.families[famIndex] as Family;
-    const region = regionOf(fam);
-    const tally = (regions[region] ??= newTally(nCases));
+    const tally = famTally[famIndex] as RegionTally;
     const li = table.layout[i] as number;
     const fi = table.fc[i] as number;
     const fc = (problem.fcs[fi] as { v: number }).v;

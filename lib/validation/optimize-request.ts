@@ -6,7 +6,8 @@
  * Defaults (the documented default space, used when `space` or a field of it is absent):
  * rectangles b, h 12–36 in step 2 and circles D 12–36 in step 2, f'c 4/5/6/8 ksi, fy 60 ksi,
  * bars #6–#11, 0–2 brace levels (0 only for a sway column), cover 1.5 in, ρmax 0.04 (common practice, so lap splices
- * fit), dagg 0.75 in, tied confinement.
+ * fit), dagg 0.75 in, tied confinement. SI requests default to 300–900 mm step 50, f'c
+ * 28/35/42/55 MPa, fy 420 MPa, A615M bars 19–36, cover 40 mm, dagg 20 mm.
  */
 import { z } from "zod";
 import type { BarSize } from "../../engine/types";
@@ -44,6 +45,27 @@ export const DEFAULT_SPACE = {
   dagg: 0.75,
   confinement: ["tied"] as Array<"tied" | "spiral">,
 };
+
+/** The default space of an SI request: mm, MPa, A615M bars (grade 420 ≈ 60 ksi). */
+export const DEFAULT_SPACE_SI: typeof DEFAULT_SPACE = {
+  shapes: ["rect", "circle"],
+  b: [300, 900, 50],
+  h: [300, 900, 50],
+  D: [300, 900, 50],
+  fc: [28, 35, 42, 55],
+  fy: [420],
+  sizes: ["19", "22", "25", "29", "32", "36"],
+  braceLevels: [0, 1, 2],
+  cover: 40,
+  rhoMax: 0.04,
+  dagg: 20,
+  confinement: ["tied"],
+};
+
+/** The defaults for a request's units. */
+export function defaultSpaceFor(units: "US" | "SI" | undefined): typeof DEFAULT_SPACE {
+  return units === "SI" ? DEFAULT_SPACE_SI : DEFAULT_SPACE;
+}
 
 export const spaceSchema = z
   .object({
@@ -84,8 +106,9 @@ export const optimizeRequestSchema = z
   .superRefine((req, ctx) => {
     const space = req.space ?? {};
     const si = req.units === "SI";
+    const defaults = defaultSpaceFor(req.units);
     const fyLimit = si ? 551.6 : 80;
-    (space.fy ?? DEFAULT_SPACE.fy).forEach((fy, i) => {
+    (space.fy ?? defaults.fy).forEach((fy, i) => {
       if (fy > fyLimit) {
         ctx.addIssue({ code: "custom", path: ["space", "fy", i], message: `fy above ${si ? "551.6 MPa" : "80 ksi"} is not allowed for longitudinal bars (Table 20.2.2.4(a))` });
       }
@@ -95,7 +118,7 @@ export const optimizeRequestSchema = z
       if (names.has(l.name)) ctx.addIssue({ code: "custom", path: ["loads", i, "name"], message: `duplicate load case name "${l.name}"` });
       names.add(l.name);
     });
-    (space.fc ?? DEFAULT_SPACE.fc).forEach((fc, i) => {
+    (space.fc ?? defaults.fc).forEach((fc, i) => {
       const key = String(fc);
       const has = (table: Record<string, number>) => Object.keys(table).some((k) => Math.abs(Number(k) - fc) <= 1e-6 * Math.max(1, fc));
       if (!has(req.prices.concrete)) {
@@ -105,7 +128,7 @@ export const optimizeRequestSchema = z
         ctx.addIssue({ code: "custom", path: ["carbon", "concrete", key], message: `no carbon factor for f'c ${key} (space.fc[${i}])` });
       }
     });
-    const shapes = space.shapes ?? DEFAULT_SPACE.shapes;
+    const shapes = space.shapes ?? defaults.shapes;
     if ((space.confinement ?? []).includes("spiral") && !shapes.includes("circle")) {
       ctx.addIssue({ code: "custom", path: ["space", "confinement"], message: "spirals are searched for circles only: add \"circle\" to space.shapes" });
     }

@@ -182,3 +182,32 @@ describe("cancellation in process", () => {
     expect(calls).toBeGreaterThan(0);
   });
 });
+
+describe("SI requests", () => {
+  // an invented 4.2 m column in kN, kN·m, mm and MPa with A615M bars; prices per m³, kg, m²
+  const siRequest = {
+    units: "SI",
+    member: { lu: 4200, kx: 1, ky: 1, braced: true },
+    loads: [
+      { name: "1.2D+1.6L", Pu: 2500, betaDns: 0.6, Mx: { M1: 100, M2: 180, curvature: "single" }, My: { M1: 20, M2: 60, curvature: "double" } },
+      { name: "1.2D+1.0W+L", Pu: 1700, betaDns: 0.7, Mx: { M1: 150, M2: 260, curvature: "double" } },
+    ],
+    prices: { concrete: { "28": 250, "35": 265, "42": 280, "55": 320 }, steel: 2.5, formwork: 145, roundFormwork: 195, brace: 2400 },
+    carbon: { concrete: { "28": 340, "35": 380, "42": 420, "55": 500 }, steel: 0.9 },
+    space: { b: [300, 500, 100], h: [300, 500, 100], D: [300, 500, 100], fc: [28, 55], sizes: ["19", "25"], braceLevels: [0, 1] },
+  };
+
+  it("search in mm and MPa, name candidates in the request's numbers, and equal the exhaustive search", () => {
+    const p = runSearchInProcess(siRequest);
+    const x = runSearchInProcess(siRequest, { exhaustive: true });
+    expect(p.best).not.toBeNull();
+    expect(summary(p)).toEqual(summary(x));
+    expect(p.front).toEqual(x.front);
+    for (const e of p.front) expect(e.id).toMatch(/^(r[345]00x[345]00|c[345]00)-f(28|55)-y420-\d+(19|25)-/);
+    // quantities in m³ / kg / m² under the contract's field names (as the check command does)
+    const e = p.best as FrontEntry;
+    const L = 4.2;
+    const area = e.shape === "rect" ? ((e.b as number) / 1000) * ((e.h as number) / 1000) : (Math.PI * ((e.D as number) / 1000) ** 2) / 4;
+    expect(e.quantities.concreteYd3).toBeCloseTo(area * L, 3);
+  });
+});

@@ -101,7 +101,7 @@ describe("quantities, cost, carbon and φPn,max = the engine's, bit for bit", ()
       const fc = (problem.fcs[fi] as { v: number }).v;
       const n = problem.braceLevels[table.brace[i] as number] as number;
       const sec = resolveSection(sectionInputOf(problem, { ...fam, fy: fam.fy.v }, fam.layouts[li] as [number, number], fc));
-      const q = computeQuantities(sec, { ...problem.member, braceLevels: n }, countCrossTies(sec));
+      const q = computeQuantities(sec, problem.member, countCrossTies(sec));
       const mine = quantitiesOf(problem, fam, li, fi);
       expect(mine.concreteYd3).toBe(q.concreteYd3);
       expect(mine.longitudinalLb).toBe(q.longitudinalLb);

@@ -1,0 +1,125 @@
+/**
+ * Optimizer benchmark (npm run bench:optimizer): the documented default space — rectangles
+ * b, h 12–36 in step 2 (both orientations), circles D 12–36 in step 2, f'c 4/5/6/8 ksi,
+ * fy 60 ksi, bars #6–#11, 0–2 brace levels, ρ 0.01…0.04 — with ten load combinations of a
+ * 23 ft braced column (an invented scenario). Prints candidates, full checks, case checks and
+ * wall time of the pruned search with 1 and with 2 threads (warm pool, median of the runs;
+ * the first, cold run is printed too), the speed-up, and the exhaustive search on the same
+ * space, whose fronts are compared with the pruned ones.
+ *
+ *   npm run bench:optimizer                 # everything (the exhaustive run takes minutes)
+ *   npm run bench:optimizer -- --runs 5     # more timed runs per thread count
+ *   npm run bench:optimizer -- --no-exhaustive
+ */
+import os from "node:os";
+import type { LoadCase } from "../engine/types";
+import { closeOptimizerPools, getOptimizerPool, runSearchOnPool } from "../optimizer/optimizer-pool";
+import type { OptimizeResult } from "../optimizer/merge-results";
+// @ts-expect-error -- plain ESM build script without type declarations
+import { ensureWorkerBundle } from "./build-workers.mjs";
+
+const loads: LoadCase[] = [
+  { name: "1.4D", Pu: 620, betaDns: 1.0, Mx: { M1: 300, M2: 600, curvature: "single" }, My: { M1: 100, M2: 200, curvature: "double" } },
+  { name: "1.2D+1.6L", Pu: 780, betaDns: 0.6, Mx: { M1: 500, M2: 1100, curvature: "single" }, My: { M1: 150, M2: 300, curvature: "double" } },
+  { name: "1.2D+1.6L+0.5S", Pu: 800, betaDns: 0.58, Mx: { M1: 520, M2: 1150, curvature: "single" }, My: { M1: 160, M2: 320, curvature: "double" } },
+  { name: "1.2D+1.6S+L", Pu: 760, betaDns: 0.62, Mx: { M1: 480, M2: 1050, curvature: "single" }, My: { M1: 140, M2: 280, curvature: "double" } },
+  { name: "1.2D+1.0W+L", Pu: 560, betaDns: 0.75, Mx: { M1: 900, M2: 1900, curvature: "double" }, My: { M1: 200, M2: 400, curvature: "single" } },
+  { name: "1.2D+1.0Wy+L", Pu: 540, betaDns: 0.78, Mx: { M1: 300, M2: 700, curvature: "single" }, My: { M1: 700, M2: 1500, curvature: "double" } },
+  { name: "0.9D+1.0W", Pu: 330, betaDns: 1.0, Mx: { M1: 900, M2: 1850, curvature: "double" }, My: { M1: 0, M2: 0, curvature: "double" } },
+  { name: "0.9D+1.0Wy", Pu: 320, betaDns: 1.0, Mx: { M1: 0, M2: 0, curvature: "double" }, My: { M1: 700, M2: 1450, curvature: "double" } },
+  { name: "1.2D+1.0E+L", Pu: 600, betaDns: 0.7, Mx: { M1: 1000, M2: 2100, curvature: "double" }, My: { M1: 300, M2: 600, curvature: "double" } },
+  { name: "0.9D+1.0E", Pu: 300, betaDns: 1.0, Mx: { M1: 1000, M2: 2000, curvature: "double" }, My: { M1: 300, M2: 600, curvature: "single" } },
+];
+
+const request = {
+  member: { lu: 276, kx: 1.0, ky: 1.0, braced: true },
+  loads,
+  prices: { concrete: { "4": 190, "5": 200, "6": 215, "8": 245 }, steel: 1.15, formwork: 13.5, roundFormwork: 18.0, brace: 2400 },
+  carbon: { concrete: { "4": 260, "5": 290, "6": 320, "8": 380 }, steel: 0.4 },
+  // space omitted: the documented default space
+};
+
+const args = process.argv.slice(2);
+const runsArg = args.indexOf("--runs");
+const runs = runsArg >= 0 ? Math.max(1, Number(args[runsArg + 1]) || 3) : 3;
+const exhaustive = !args.includes("--no-exhaustive");
+
+const median = (xs: number[]) => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s.length % 2 ? (s[(s.length - 1) / 2] as number) : ((s[s.length / 2 - 1] as number) + (s[s.length / 2] as number)) / 2;
+};
+const ms = (x: number) => `${x.toFixed(0)} ms`;
+const fronts = (r: OptimizeResult) => JSON.stringify([r.best, r.front, r.carbonFront]);
+
+async function timed(threads: number, pool: ReturnType<typeof getOptimizerPool>) {
+  const t0 = performance.now();
+  const r = await runSearchOnPool(request, { pool, threads });
+  return { wall: performance.now() - t0, r };
+}
+
+async function main(): Promise<void> {
+  const bundle = (await ensureWorkerBundle()) as string;
+  console.log(`machine: ${os.availableParallelism()} cores, Node ${process.version}; worker ${bundle}`);
+  const pool = getOptimizerPool({ filename: bundle, maxThreads: 2 });
+
+  const cold1 = await timed(1, pool);
+  const cold2 = await timed(2, pool);
+  console.log(`space: ${cold1.r.stats.candidates} candidates after the detailing limits; ${loads.length} load cases`);
+  console.log(`cold (first run, threads starting): 1 thread ${ms(cold1.wall)}, 2 threads ${ms(cold2.wall)}`);
+
+  const t1: number[] = [];
+  const t2: number[] = [];
+  let r1 = cold1.r;
+  let r2 = cold2.r;
+  for (let i = 0; i < runs; i++) {
+    const a = await timed(1, pool);
+    t1.push(a.wall);
+    r1 = a.r;
+    const b = await timed(2, pool);
+    t2.push(b.wall);
+    r2 = b.r;
+  }
+  if (fronts(r1) !== fronts(r2)) throw new Error("1 and 2 threads gave different fronts");
+  const m1 = median(t1);
+  const m2 = median(t2);
+  console.log("");
+  console.log("pruned search            1 thread        2 threads");
+  console.log(`  wall time (median ${runs})   ${ms(m1).padEnd(15)} ${ms(m2)}`);
+  console.log(`  full checks            ${String(r1.stats.fullChecks).padEnd(15)} ${r2.stats.fullChecks}`);
+  console.log(`  case checks            ${String(r1.counters.caseChecks).padEnd(15)} ${r2.counters.caseChecks}`);
+  console.log(`  passing evaluated      ${String(r1.stats.passing).padEnd(15)} ${r2.stats.passing}`);
+  console.log(`  speed-up 1 → 2 threads ${(m1 / m2).toFixed(2)}×`);
+  console.log(`  front ${r1.front.length} members, carbon front ${r1.carbonFront.length}, best ${r1.best?.id} $${r1.best?.cost} u = ${r1.best?.utilization}`);
+
+  if (exhaustive) {
+    let last = 0;
+    const t0 = performance.now();
+    const x = await runSearchOnPool(request, {
+      pool,
+      threads: 2,
+      exhaustive: true,
+      progressMs: 1000,
+      onProgress: (p) => {
+        if (performance.now() - last > 15_000) {
+          last = performance.now();
+          process.stderr.write(`  exhaustive ${(100 * p.fraction).toFixed(0)} %\n`);
+        }
+      },
+    });
+    const wall = performance.now() - t0;
+    console.log("");
+    console.log("exhaustive search (2 threads)");
+    console.log(`  wall time              ${ms(wall)}`);
+    console.log(`  full checks            ${x.stats.fullChecks}`);
+    console.log(`  case checks            ${x.counters.caseChecks}`);
+    console.log(`  passing                ${x.stats.passing}`);
+    console.log(`  same best and fronts as the pruned search: ${fronts(x) === fronts(r2) ? "yes" : "NO"}`);
+    console.log(`  full checks exhaustive / pruned: ${(x.stats.fullChecks / Math.max(1, r2.stats.fullChecks)).toFixed(0)}×; case checks: ${(x.counters.caseChecks / Math.max(1, r2.counters.caseChecks)).toFixed(1)}×`);
+    console.log(`  wall time exhaustive / pruned (2 threads): ${(wall / m2).toFixed(0)}×`);
+  }
+  console.log("");
+  console.log(`targets: ≥ 10× fewer full checks than exhaustive; < 2000 ms with 2 threads (${ms(m2)}); 2 threads ≥ 1.7× faster (${(m1 / m2).toFixed(2)}×)`);
+  await closeOptimizerPools();
+}
+
+await main();
