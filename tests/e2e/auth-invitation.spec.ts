@@ -22,7 +22,7 @@ async function signInWithPassword(page: Page, email: string, password: string) {
   await page.getByRole("button", { name: "Sign in", exact: true }).click();
 }
 
-test("sign up, start a workspace, invite a colleague who accepts from the caught mail and lands with the invited role", async ({ page, browser }) => {
+test("sign up, start a workspace, sign in, invite a colleague who accepts from the caught mail and lands with the invited role", async ({ page, browser }) => {
   const ownerEmail = `founder-${run}@e2e.test`;
   const colleagueEmail = `colleague-${run}@e2e.test`;
   const workspaceName = `Brandvold Ekwueme Engineers ${run}`;
@@ -45,6 +45,12 @@ test("sign up, start a workspace, invite a colleague who accepts from the caught
   const workspaceUrl = new URL(page.url()).pathname;
   await expect(page.getByRole("combobox", { name: "Workspace" })).toHaveValue(workspaceUrl.split("/")[2] ?? "");
   await expect(page.getByText("licensed engineer").first()).toBeVisible();
+
+  // Sign out and back in with the password: the workspace is the one the owner lands in.
+  await page.getByRole("button", { name: "Sign out" }).click();
+  await expect(page).toHaveURL(/\/sign-in/);
+  await signInWithPassword(page, ownerEmail, "slender-pier-magnifier-42");
+  await expect(page).toHaveURL(new RegExp(`${workspaceUrl}$`));
 
   // Invite a colleague as estimator.
   await page.getByRole("navigation", { name: "Workspace" }).getByRole("link", { name: "Members" }).click();
