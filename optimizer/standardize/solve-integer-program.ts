@@ -27,12 +27,19 @@ export interface IntegerProgramOptions {
   objective?: "cost" | "count";
   /** ms before the solver gives up (its best so far is then not proven) */
   timeoutMs?: number;
+  /**
+   * Largest variables × constraints to hand to the solver (its simplex keeps a dense tableau, so
+   * memory and pivot time grow with this product); a larger model is not solved (`skipped`).
+   */
+  maxTableau?: number;
 }
 
 export interface IntegerProgramResult {
   feasible: boolean;
-  /** false when the time limit stopped the branch and bound */
+  /** false when the time limit stopped the branch and bound, or the model was skipped */
   finished: boolean;
+  /** true when the model exceeded maxTableau and was not solved */
+  skipped: boolean;
   /** outlines with y = 1 */
   open: number[];
   /** the solver's objective value (cents, or a count) */
@@ -112,12 +119,15 @@ export function solveIntegerProgram<C extends StandardizeCandidate>(p: PreparedP
   const model = buildIntegerProgram(p, opts);
   const nVars = Object.keys(model.variables).length;
   const nCons = Object.keys(model.constraints).length;
+  if (opts.maxTableau !== undefined && nVars * nCons > opts.maxTableau) {
+    return { feasible: false, finished: false, skipped: true, open: [], objective: Number.NaN, variables: nVars, constraints: nCons, ms: 0 };
+  }
   const t0 = performance.now();
   const r = solver.Solve(model);
   const ms = performance.now() - t0;
   if (!isSolveResult(r)) throw new Error("javascript-lp-solver returned no result");
   const finished = opts.timeoutMs === undefined || ms < opts.timeoutMs;
-  if (!r.feasible) return { feasible: false, finished, open: [], objective: Number.NaN, variables: nVars, constraints: nCons, ms };
+  if (!r.feasible) return { feasible: false, finished, skipped: false, open: [], objective: Number.NaN, variables: nVars, constraints: nCons, ms };
   const open: number[] = [];
   for (const name of Object.keys(model.variables)) {
     if (!name.startsWith("y")) continue;
@@ -125,5 +135,5 @@ export function solveIntegerProgram<C extends StandardizeCandidate>(p: PreparedP
     if (typeof v === "number" && v > 0.5) open.push(Number(name.slice(1)));
   }
   open.sort((a, b) => a - b);
-  return { feasible: true, finished, open, objective: r.result, variables: nVars, constraints: nCons, ms };
+  return { feasible: true, finished, skipped: false, open, objective: r.result, variables: nVars, constraints: nCons, ms };
 }

@@ -34,6 +34,8 @@ export interface StandardizeSolveOptions {
   method?: "auto" | "integer-program" | "branch-and-bound";
   /** time limit of the integer program in "auto", ms (default 3 000; the exact branch and bound then finishes) */
   timeoutMs?: number;
+  /** largest variables × constraints handed to the solver in "auto" (default MAX_TABLEAU) */
+  maxTableau?: number;
 }
 
 /** Outline sets worth starting from (e.g. the optimum for a smaller N). */
@@ -94,12 +96,35 @@ export function findStructuralReasons<C extends StandardizeCandidate>(p: Prepare
   return reasons;
 }
 
+/**
+ * Largest integer program (variables × constraints) handed to javascript-lp-solver in "auto";
+ * about twice the whole 30-mark × 40-outline model. Larger ones go to the branch and bound.
+ */
+export const MAX_TABLEAU = 2_500_000;
+
 /** The fewest distinct outlines that give every mark a passing candidate (f'c rule included). */
-export function countMinimumOutlines<C extends StandardizeCandidate>(p: PreparedProject<C>): number | null {
-  const r = solveIntegerProgram(p, { maxOutlines: p.outlines.length, objective: "count" });
-  if (!r.feasible) return null;
-  // the count program may leave spare outlines open at a tie; count only those really used
-  return evaluateOutlineSet(p, openSet(p.outlines.length, r.open)).used.length;
+export function countMinimumOutlines<C extends StandardizeCandidate>(p: PreparedProject<C>, maxTableau = MAX_TABLEAU): number | null {
+  const nO = p.outlines.length;
+  const r = solveIntegerProgram(p, { maxOutlines: nO, objective: "count", maxTableau });
+  if (!r.skipped) {
+    if (!r.feasible) return null;
+    // the count program may leave spare outlines open at a tie; count only those really used
+    return evaluateOutlineSet(p, openSet(nO, r.open)).used.length;
+  }
+  // too large for the solver: the same count by the exact branch and bound, every candidate free
+  // and every form set one cent
+  const counting: PreparedProject<C> = {
+    ...p,
+    maxOutlines: nO,
+    formSetCents: 1,
+    marks: p.marks.map((m) => ({ ...m, options: m.options.map((o) => ({ ...o, cents: 0 })) })),
+  };
+  const start = improveOutlineSet(counting, nO).value;
+  const bb = solveByBranchAndBound(counting, relaxCosts(counting), nO, {
+    set: start.uncovered === 0 ? start.used : null,
+    totalCents: start.uncovered === 0 ? start.totalCents : Number.POSITIVE_INFINITY,
+  });
+  return bb.set === null ? null : evaluateOutlineSet(counting, openSet(nO, bb.set)).used.length;
 }
 
 function emptyStats(method: StandardizeMethod, ms: number, p: PreparedProject<StandardizeCandidate> | null): StandardizeStats {
@@ -230,7 +255,7 @@ export function solvePrepared<C extends StandardizeCandidate>(
   let minOutlines = hints.minOutlines;
   const stats = emptyStats(method === "auto" ? "integer-program" : method, 0, p);
   if (best.uncovered > 0) {
-    if (minOutlines === undefined) minOutlines = countMinimumOutlines(p);
+    if (minOutlines === undefined) minOutlines = countMinimumOutlines(p, options.maxTableau ?? MAX_TABLEAU);
     if (minOutlines === null || minOutlines > N) {
       const fcNote = p.oneFcPerLevel && p.levels.length > 0 ? " with one f'c per level" : "";
       const reason =
@@ -283,14 +308,15 @@ export function solvePrepared<C extends StandardizeCandidate>(
       let inModel = 0;
       for (let o = 0; o < nO; o++) if (state[o] !== -1) inModel++;
       stats.outlinesInModel = inModel;
-      const ip = solveIntegerProgram(p, { maxOutlines: N, state, timeoutMs: options.timeoutMs ?? 3_000 });
-      stats.variables = ip.variables;
-      stats.constraints = ip.constraints;
+      const ip = solveIntegerProgram(p, { maxOutlines: N, state, timeoutMs: options.timeoutMs ?? 3_000, maxTableau: options.maxTableau ?? MAX_TABLEAU });
+      stats.variables = ip.skipped ? 0 : ip.variables;
+      stats.constraints = ip.skipped ? 0 : ip.constraints;
       if (ip.feasible) adopt(ip.open);
       if (ip.finished) {
         // infeasible here means no assignment beats the incumbent among the unfixed outlines
         proven = true;
       } else {
+        // time limit reached, or the model too large for the dense simplex
         stats.method = "branch-and-bound";
         const bb = solveByBranchAndBound(p, rc, N, { set: best.uncovered === 0 ? best.used : null, totalCents: incumbentCents() }, { state });
         if (bb.set !== null) adopt(bb.set);
@@ -303,7 +329,7 @@ export function solvePrepared<C extends StandardizeCandidate>(
   stats.optimal = proven;
   if (best.uncovered > 0) {
     // the exact methods found nothing either: N is below the fewest outlines needed
-    if (minOutlines === undefined) minOutlines = countMinimumOutlines(p);
+    if (minOutlines === undefined) minOutlines = countMinimumOutlines(p, options.maxTableau ?? MAX_TABLEAU);
     const reason = `no assignment uses at most ${N} distinct outline${N === 1 ? "" : "s"}${minOutlines !== null && minOutlines !== undefined ? `: the fewest that give every mark a passing candidate is ${minOutlines}` : ""}`;
     stats.method = "none";
     return infeasibleResult(p, input, [reason], minOutlines ?? null, stats);

@@ -9,6 +9,8 @@ import { describe, expect, it } from "vitest";
 import { standardizeProject, sweepOutlines, type StandardizeCandidate, type StandardizeInput, type StandardizeResult } from "../../optimizer/standardize";
 import type { FrontEntry } from "../../optimizer/front-entry";
 import { inventProject } from "../../optimizer/standardize/invent-project";
+import { prepareProject } from "../../optimizer/standardize/prepare-project";
+import { countMinimumOutlines } from "../../optimizer/standardize/standardize-project";
 
 type Method = "auto" | "integer-program" | "branch-and-bound";
 const METHODS: Method[] = ["auto", "integer-program", "branch-and-bound"];
@@ -248,6 +250,24 @@ describe("properties of the optimum", () => {
     expect(r.stats.nodes).toBeGreaterThan(0);
     expect(r.stats.optimal).toBe(true);
     expect(r.totalCost).toBe(reference.totalCost);
+  });
+
+  it("a model too large for the solver goes to the exact branch and bound, with the same optimum and count", () => {
+    const input = { ...inventProject({ seed: 32, marks: 20, outlinesPerMark: 25, formSetCost: 3000 }), maxOutlines: 3 };
+    const reference = standardizeProject(input, { method: "integer-program" });
+    const r = standardizeProject(input, { maxTableau: 0 });
+    expect(["branch-and-bound", "bound"]).toContain(r.stats.method);
+    expect(r.stats.variables).toBe(0);
+    expect(r.totalCost).toBe(reference.totalCost);
+    const narrow = inventProject({ seed: 2, marks: 20, outlinesPerMark: 8, formSetCost: 5000, sizes: Array.from({ length: 18 }, (_, i) => 12 + 2 * i) });
+    const p = prepareProject({ ...narrow, maxOutlines: 1 });
+    const byProgram = countMinimumOutlines(p);
+    expect(byProgram).toBeGreaterThan(1);
+    expect(countMinimumOutlines(p, 0)).toBe(byProgram);
+    const tooFew = standardizeProject({ ...narrow, maxOutlines: (byProgram as number) - 1 }, { maxTableau: 0 });
+    expect(tooFew.feasible).toBe(false);
+    expect(tooFew.minOutlines).toBe(byProgram);
+    expect(standardizeProject({ ...narrow, maxOutlines: byProgram as number }, { maxTableau: 0 }).feasible).toBe(true);
   });
 
   it("30 marks × 40 outlines: the reduced integer program and the branch and bound agree", () => {
