@@ -200,7 +200,7 @@ function writeDiagram(doc: Doc, check: StoredDesignCheck): void {
   const axis = governingAxis(out);
   const diagram = interactionDiagram(sec, axis, 60);
   const cases = out?.cases ?? [];
-  const loads: LoadPoint[] = cases.map((c, i) => ({ tag: String(i + 1), Pu: c.Pu, M1st: c[axis].M2, Mc: c[axis].slender && c[axis].delta === null ? null : c[axis].Mc }));
+  const loads: LoadPoint[] = cases.map((c, i) => ({ tag: `${i + 1}${c.biaxial ? "*" : ""}`, Pu: c.Pu, M1st: c[axis].M2, Mc: c[axis].slender && c[axis].delta === null ? null : c[axis].Mc }));
   write(
     doc,
     out
@@ -212,6 +212,11 @@ function writeDiagram(doc: Doc, check: StoredDesignCheck): void {
   drawInteractionDiagram(doc, diagram, loads, axis, { x: PAGE.left, y: y0, width: CONTENT_WIDTH, height: 250 });
   doc.x = PAGE.left;
   doc.y = y0 + 258;
+  const notes: string[] = [];
+  if (cases.some((c) => c.biaxial)) notes.push("* checked biaxially: the resultant of Mcx and Mcy against the capacity in its own direction (see Moment magnifier); the uniaxial curve alone does not decide those cases.");
+  if (sec.shape === "circle") notes.push("Circular section: the check uses the weaker of the bar layout as given and the layout turned by half a bar pitch; the curves show the layout as given.");
+  for (const n of notes) write(doc, n, { size: 8, color: INK.muted });
+  if (notes.length) doc.moveDown(0.3);
   if (cases.length === 0) return;
   table(
     doc,
@@ -225,7 +230,7 @@ function writeDiagram(doc: Doc, check: StoredDesignCheck): void {
       { header: "Mc/φMn", width: 9, align: "right" },
       { header: "Case utilization", width: 10, align: "right" },
     ],
-    cases.map((c, i) => [String(i + 1), c.name, num(c.Pu, 1), num(c[axis].M2, 1), loads[i]?.Mc === null ? "unstable" : num(c[axis].Mc, 1), num(c[axis].phiMn, 1), num(c[axis].ratio, 3), c.utilization === null ? "unbounded" : num(c.utilization, 3)]),
+    cases.map((c, i) => [loads[i]?.tag ?? String(i + 1), c.name, num(c.Pu, 1), num(c[axis].M2, 1), loads[i]?.Mc === null ? "unstable" : num(c[axis].Mc, 1), num(c[axis].phiMn, 1), num(c[axis].ratio, 3), c.utilization === null ? "unbounded" : num(c.utilization, 3)]),
     { flagged: new Set(cases.flatMap((c, i) => (c.pass ? [] : [i]))) },
   );
 }
