@@ -1,7 +1,7 @@
 import type { MomentCapacity, ResolvedSection } from "../types";
 import { findRoot } from "./find-root";
 import {
-  PHI_TENSION, axialInRange, evaluate, kernelOf, newRoot, phiPnAt, setDirection, solveC, solveMulti, solveSingle,
+  PHI_TENSION, axialInRange, evaluate, kernelOf, newRoot, phiPnAt, setDirection, solveC, solveMulti, solveNear, solveSingle,
   type Kernel,
 } from "./section-kernel";
 import { snapUnit } from "./section-forces-at";
@@ -143,7 +143,8 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
 function capacityAtAlpha(k: Kernel, Pu: number, theta: number, alpha: number, known: number): BiaxialCapacity {
   const dir = k.scratchDir;
   setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
-  solveMulti(k, dir, Pu, Math.cos(theta), Math.sin(theta), root, known);
+  if (Number.isNaN(known)) solveMulti(k, dir, Pu, Math.cos(theta), Math.sin(theta), root);
+  else solveNear(k, dir, Pu, Math.cos(theta), Math.sin(theta), root, known);
   if (Number.isNaN(root.c)) solveSingle(k, dir, Pu, 0, root);
   const main = capacityOf(k, alpha);
   if (Number.isNaN(known) || Math.abs(root.c - known) <= 1e-9 * dir.cP0) return main;

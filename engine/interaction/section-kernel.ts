@@ -600,6 +600,126 @@ const jumpC = { buf: new Float64Array(16) };
 const jumpA = { buf: new Float64Array(16) };
 const multiOut = new Float64Array(4);
 
+const stepL = { buf: new Float64Array(16) };
+const stepPhi = { buf: new Float64Array(16) };
+const localOut = new Float64Array(4);
+
+/**
+ * Like {@link solveMulti}, starting from a root `known` already found in this direction:
+ * the step nodes are evaluated outward from it only as far as another root is possible.
+ * Between steps φPn rises with c (checked by the tests for a range of sections), and a
+ * step lowers it by at most 0.9·0.85 f'c·A of its bars, so once a node lies further from
+ * Pu than all the remaining steps together can bridge, no further root exists that way.
+ * The smallest design moment projected on (px, py) governs (§7.6).
+ */
+export function solveNear(
+  k: Kernel, dir: Direction, Pu: number, px: number, py: number, res: RootResult, known: number,
+): RootResult {
+  const n = k.n;
+  if (jumpC.buf.length < n + 3) {
+    jumpC.buf = new Float64Array((n + 3) * 2);
+    jumpA.buf = new Float64Array((n + 3) * 2);
+  }
+  if (stepL.buf.length < n + 3) {
+    stepL.buf = new Float64Array((n + 3) * 2);
+    stepPhi.buf = new Float64Array((n + 3) * 2);
+  }
+  const cj = jumpC.buf;
+  const aj = jumpA.buf;
+  const mergeTol = 1e-9 * dir.cP0;
+  let m = 0;
+  for (let i = 0; i < n; i++) {
+    const di = dir.d[i] as number;
+    if (di > 0 && di < dir.depth) m = insertStep(cj, aj, m, di / k.beta1, k.ba[i] as number, mergeTol);
+  }
+  for (let j = 0; j < m; j++) stepL.buf[j] = Number.NaN;
+  near.k = k;
+  near.dir = dir;
+  near.Pu = Pu;
+  near.px = px;
+  near.py = py;
+  near.res = res;
+  near.best = Number.POSITIVE_INFINITY;
+  res.c = Number.NaN;
+  considerRoot(known);
+  let p = 0;
+  while (p < m && (cj[p] as number) < known) p++;
+  const dUnit = PHI_TENSION * k.k85;
+  // right of the known root: piece j + 1 starts just above step j
+  let reach = 0;
+  for (let j = p; j < m; j++) reach += dUnit * (aj[j] as number);
+  for (let j = p; j < m; j++) {
+    reach -= dUnit * (aj[j] as number);
+    const r = stepRight(j);
+    if (r < 0) {
+      const cEnd = j + 1 < m ? (cj[j + 1] as number) * (1 - 1e-10) : dir.cP0;
+      const fEnd = j + 1 < m ? stepLeft(j + 1) : k.phiC * k.P0 - Pu;
+      if (fEnd >= 0) considerRoot(solveC(k, dir, Pu, (cj[j] as number) * (1 + 1e-10), r, cEnd, fEnd));
+    } else if (r > reach) break;
+  }
+  // left of the known root: piece j ends just below step j
+  reach = 0;
+  for (let j = 0; j < p; j++) reach += dUnit * (aj[j] as number);
+  for (let j = p - 1; j >= 0; j--) {
+    reach -= dUnit * (aj[j] as number);
+    const l = stepLeft(j);
+    if (l > 0) {
+      const cStart = j > 0 ? (cj[j - 1] as number) * (1 + 1e-10) : 0;
+      const fStart = j > 0 ? stepRight(j - 1) : -PHI_TENSION * k.Pnt - Pu;
+      if (fStart < 0) considerRoot(solveC(k, dir, Pu, cStart, fStart, (cj[j] as number) * (1 - 1e-10), l));
+    } else if (l < -reach) break;
+  }
+  return res;
+}
+
+/** State of the current {@link solveNear} call (module level: no closures per call). */
+const near = {
+  k: null as Kernel | null,
+  dir: null as Direction | null,
+  Pu: 0,
+  px: 0,
+  py: 0,
+  res: null as RootResult | null,
+  best: 0,
+};
+
+/** φPn − Pu just below step j (memoised), with φ there kept in stepPhi. */
+function stepLeft(j: number): number {
+  let v = stepL.buf[j] as number;
+  if (Number.isNaN(v)) {
+    const k = near.k as Kernel;
+    evaluate(k, near.dir as Direction, (jumpC.buf[j] as number) * (1 - 1e-10), localOut);
+    const phi = phiOf(localOut[3] as number, k.epsTy, k.phiC);
+    v = phi * (localOut[0] as number) - near.Pu;
+    stepL.buf[j] = v;
+    stepPhi.buf[j] = phi;
+  }
+  return v;
+}
+
+/** φPn − Pu just above step j: the left value less the displaced concrete entering there. */
+function stepRight(j: number): number {
+  const v = stepLeft(j);
+  return v - (stepPhi.buf[j] as number) * (near.k as Kernel).k85 * (jumpA.buf[j] as number);
+}
+
+function considerRoot(c: number): void {
+  const k = near.k as Kernel;
+  const res = near.res as RootResult;
+  evaluate(k, near.dir as Direction, c, localOut);
+  const phi = phiOf(localOut[3] as number, k.epsTy, k.phiC);
+  const mProj = phi * ((localOut[1] as number) * near.px + (localOut[2] as number) * near.py);
+  if (mProj < near.best) {
+    near.best = mProj;
+    res.c = c;
+    res.Pn = localOut[0] as number;
+    res.Mx = localOut[1] as number;
+    res.My = localOut[2] as number;
+    res.epsT = localOut[3] as number;
+    res.phi = phi;
+  }
+}
+
 /**
  * Every root of φPn(c) = Pu for an arbitrary direction without a cached scan: the
  * nodes are c = 0, each displaced-concrete step c = d/β1 (left value evaluated, right

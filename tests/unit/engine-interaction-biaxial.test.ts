@@ -155,6 +155,42 @@ describe("phiMnAtAngle — rectangular sections", () => {
   });
 });
 
+describe("premise of the biaxial root search", () => {
+  it("φPn rises with c between displaced-concrete steps (rectangles, circles, any angle)", () => {
+    const sections = [
+      S,
+      C,
+      resolveSection({ ...base, b: 12, h: 30, fc: 3, fy: 80, layout: { type: "perimeter", size: "#14", nb: 2, nh: 4 } }),
+      resolveSection({ ...base, b: 30, h: 12, fc: 10, fy: 60, layout: { type: "faces", size: "#11", n: 5 } }),
+      resolveSection({ ...circleInput, confinement: "spiral", layout: { type: "circle", size: "#11", n: 7 } }),
+      resolveSection({
+        ...base, layout: undefined,
+        bars: [{ x: -7, y: 9, size: "#18" }, { x: 7, y: 9, size: "#18" }, { x: 0, y: -9, size: "#5" }],
+      }),
+    ];
+    for (const sec of sections) {
+      for (let t = 0; t < 8; t++) {
+        const alpha = 0.1 + (t * Math.PI) / 4;
+        const ux = Math.sin(alpha);
+        const uy = Math.cos(alpha);
+        const tmax = sec.shape === "circle" ? sec.D / 2 : (sec.b / 2) * Math.abs(ux) + (sec.h / 2) * Math.abs(uy);
+        const steps = sec.bars.map((b) => (tmax - (b.x * ux + b.y * uy)) / sec.beta1);
+        let prev = Number.NEGATIVE_INFINITY;
+        let prevC = 0;
+        for (let i = 1; i <= 600; i++) {
+          const c = (i * 2.2 * tmax) / (sec.beta1 * 600);
+          const f = sectionForcesAt(sec, alpha, c);
+          const v = f.phi * f.Pn;
+          const crossed = steps.some((cj) => cj > prevC && cj <= c);
+          if (!crossed) expect(v).toBeGreaterThanOrEqual(prev - 1e-9 * sec.P0);
+          prev = v;
+          prevC = c;
+        }
+      }
+    }
+  });
+});
+
 describe("circular sections", () => {
   it("the capacity repeats with the bar pitch and is symmetric about each bar", () => {
     for (const t of [5, 10, 20]) {
