@@ -51,6 +51,7 @@ function mergeRegions(results: TaskResult[]): Map<string, RegionReport> {
       prev.passing += rep.passing;
       prev.dominated += rep.dominated;
       prev.axialFails += rep.axialFails;
+      prev.unstableFails += rep.unstableFails;
       rep.failedBy.forEach((n, i) => (prev.failedBy[i] = (prev.failedBy[i] ?? 0) + n));
       if (rep.strongest !== null && (prev.strongest === null || rep.strongest.phiPnMax > prev.strongest.phiPnMax)) prev.strongest = rep.strongest;
     }

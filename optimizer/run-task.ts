@@ -125,7 +125,7 @@ export function runSearchTask(task: SearchTask, hooks: { onTick?: () => void; si
     counts.set(key, (counts.get(key) ?? 0) + n);
   }
   for (const [key, n] of counts) {
-    const tally = sweep.regions[key] ?? { failedBy: problem.loads.map(() => 0), passing: 0, dominated: 0, axialFails: 0 };
+    const tally = sweep.regions[key] ?? { failedBy: problem.loads.map(() => 0), passing: 0, dominated: 0, axialFails: 0, unstableFails: 0 };
     let strong: RegionReport["strongest"] = null;
     if (!cancelled && n > 0 && tally.passing === 0 && tally.dominated === 0) {
       let best = -1;

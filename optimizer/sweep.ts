@@ -28,6 +28,7 @@
 import { caseUtilization, prepareMember, resolveSection } from "../engine";
 import type { LoadCase, MemberInput } from "../engine/types";
 import { Staircase, toUtilUnits } from "./pareto-front";
+import { proveUnstable, steelInertiaOf } from "./prove-unstable";
 import { phiPnMaxOf, sectionInputOf, type CandidateTable, type Family, type SearchProblem } from "./search-space";
 
 /** Pass tolerance of the engine's check (utilization ≤ 1 + 1e-9 passes). */
@@ -60,6 +61,8 @@ export interface RegionTally {
   dominated: number;
   /** candidates failed by the axial check before any evaluation */
   axialFails: number;
+  /** candidates proved unstable before any evaluation (prove-unstable.ts) */
+  unstableFails: number;
 }
 
 export interface SweepResult {
@@ -81,7 +84,7 @@ export function regionOf(fam: Family): string {
 }
 
 function newTally(nCases: number): RegionTally {
-  return { failedBy: new Array<number>(nCases).fill(0), passing: 0, dominated: 0, axialFails: 0 };
+  return { failedBy: new Array<number>(nCases).fill(0), passing: 0, dominated: 0, axialFails: 0, unstableFails: 0 };
 }
 
 export interface SweepOptions {
@@ -112,6 +115,7 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
   let sinceTick = 0;
   const maxPu = loads.reduce((m, l) => Math.max(m, l.Pu), -Infinity);
   const famTally: RegionTally[] = table.families.map((fam) => (regions[regionOf(fam)] ??= newTally(nCases)));
+  const iseCache = new Map<number, [number, number]>();
   const members = problem.braceLevels.map((n): MemberInput => ({ ...problem.member, braceLevels: n }));
   for (let pos = opts.from; pos < opts.to; pos++) {
     if ((pos - opts.from) % 64 === 0) {
@@ -143,6 +147,17 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
     if (carbonDominated && util.dominatesAll(cents, toUtilUnits(maxPu / phiPnMax))) {
       tally.dominated++;
       continue;
+    }
+    if (!exhaustive) {
+      const key = famIndex * 65536 + li;
+      let ise = iseCache.get(key);
+      if (ise === undefined) iseCache.set(key, (ise = steelInertiaOf(problem, fam, li)));
+      const unstable = proveUnstable(problem, fam, li, fi, problem.braceLevels[table.brace[i] as number] as number, ise);
+      if (unstable >= 0) {
+        tally.unstableFails++;
+        tally.failedBy[unstable] = (tally.failedBy[unstable] ?? 0) + 1;
+        continue;
+      }
     }
     const section = resolveSection(sectionInputOf(problem, { ...fam, fy: fam.fy.v }, fam.layouts[li] as [number, number], fc));
     const prep = prepareMember(section, members[table.brace[i] as number] as MemberInput, problem.options);

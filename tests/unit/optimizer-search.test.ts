@@ -71,7 +71,7 @@ describe("pruned search = exhaustive search", () => {
       expect(x.stats.fullChecks).toBe(x.stats.candidates);
       expect(p.stats.fullChecks * 5).toBeLessThan(x.stats.fullChecks);
       expect(p.counters.caseChecks).toBeLessThan(x.counters.caseChecks);
-    });
+    }, 120_000);
   }
 
   it("deals the families into parts that share bounds without changing the answer", () => {
@@ -101,7 +101,7 @@ describe("front members", () => {
         expect(toCents(out.carbon?.total as number), e.id).toBe(toCents(e.carbon));
         expect(out.section.rho, e.id).toBeLessThanOrEqual(0.04 + 1e-9);
       }
-    });
+    }, 120_000);
 
     it(`are dominated by no passing candidate, and dominate every other one: ${name}`, () => {
       const [p, x] = both(name, request);
@@ -117,7 +117,7 @@ describe("front members", () => {
       const sorted = [...front].sort((s, t) => s.a - t.a || s.b - t.b || (s.id < t.id ? -1 : s.id > t.id ? 1 : 0));
       expect(front.map((f) => f.id)).toEqual(sorted.map((f) => f.id));
       expect(p.best?.id).toBe(front[0]?.id);
-    });
+    }, 120_000);
   }
 });
 
@@ -209,5 +209,5 @@ describe("SI requests", () => {
     const L = 4.2;
     const area = e.shape === "rect" ? ((e.b as number) / 1000) * ((e.h as number) / 1000) : (Math.PI * ((e.D as number) / 1000) ** 2) / 4;
     expect(e.quantities.concreteYd3).toBeCloseTo(area * L, 3);
-  });
+  }, 120_000);
 });

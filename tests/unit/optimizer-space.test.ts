@@ -6,14 +6,17 @@
  */
 import { describe, expect, it } from "vitest";
 import {
+  caseUtilization,
   checkDetailing,
   computeCarbon,
   computeCost,
   computeQuantities,
   countCrossTies,
+  prepareMember,
   resolveSection,
 } from "../../engine";
-import type { SectionInput } from "../../engine/types";
+import type { LoadCase, SectionInput } from "../../engine/types";
+import { proveUnstable, steelInertiaOf } from "../../optimizer/prove-unstable";
 import { parseOptimizeRequest } from "../../lib/validation/optimize-request";
 import { formatCandidateId, parseCandidateId } from "../../optimizer/candidate-id";
 import {
@@ -81,7 +84,7 @@ describe("detailing filter = engine checkDetailing", () => {
       }
       expect(accepted).toBeGreaterThan(100);
       expect(tried).toBeGreaterThan(accepted);
-    });
+    }, 120_000);
   }
 });
 
@@ -116,7 +119,7 @@ describe("quantities, cost, carbon and φPn,max = the engine's, bit for bit", ()
       expect(carbonOf(problem, mine, fi)).toBe(computeCarbon(q, fc, problem.carbon).total);
       expect(phiPnMaxOf(fam, li, fc)).toBe(sec.phiPnMax);
     }
-  });
+  }, 120_000);
 });
 
 describe("the space a request describes", () => {
@@ -167,4 +170,35 @@ describe("candidate ids", () => {
     expect(parseCandidateId("r18x22-f5-y60-9#8-p3x3-b0")).toBeNull(); // count disagrees with nb × nh
     expect(parseCandidateId("x")).toBeNull();
   });
+});
+
+describe("proof of instability without the engine", () => {
+  for (const [label, member, ei] of [
+    ["EI option (b), 23 ft, k = 1", { lu: 276, kx: 1, ky: 1, braced: true }, "b"],
+    ["EI option (a), weak-axis strut ℓuy", { lu: 300, luy: 200, kx: 1.2, ky: 0.9, braced: true }, "a"],
+  ] as const) {
+    it(`only ever calls unstable what the engine fails as unstable (${label})`, () => {
+      const problem = problemOf(
+        { b: [12, 24, 4], h: [12, 24, 4], D: [12, 24, 4], fc: [4, 8], sizes: ["#6", "#9"], braceLevels: [0, 1, 2], confinement: ["tied", "spiral"] },
+        { member, options: { ei } },
+      );
+      const table = buildCandidateTable(problem);
+      let proved = 0;
+      for (let i = 0; i < table.n; i++) {
+        const fam = table.families[table.family[i] as number];
+        if (fam === undefined) throw new Error("family");
+        const li = table.layout[i] as number;
+        const fi = table.fc[i] as number;
+        const n = problem.braceLevels[table.brace[i] as number] as number;
+        const which = proveUnstable(problem, fam, li, fi, n, steelInertiaOf(problem, fam, li));
+        const sec = resolveSection(sectionInputOf(problem, { ...fam, fy: fam.fy.v }, fam.layouts[li] as [number, number], (problem.fcs[fi] as { v: number }).v));
+        const prep = prepareMember(sec, { ...problem.member, braceLevels: n }, problem.options);
+        if (which >= 0) {
+          proved++;
+          expect(caseUtilization(prep, problem.loads[which] as LoadCase), `${candidateIdOf(problem, table, i)} case ${which}`).toBe(Infinity);
+        }
+      }
+      expect(proved).toBeGreaterThan(100);
+    }, 120_000);
+  }
 });
