@@ -30,12 +30,19 @@ function wrapAngle(a: number): number {
  * `thetaRad` = atan2(My, Mx): measured from the +Mx axis toward +My (θ = 0 is pure Mx
  * compressing the +y face; θ = π/2 pure My compressing the +x face). For each trial
  * neutral-axis angle α (compression side u = (sin α, cos α)) the depth c is solved for
- * φPn(c) = Pu; α is iterated (secant steps, bisection-safeguarded once bracketed, |Δθ| ≤ 1e-11 rad)
- * until the nominal moment vector (Mnx, Mny) points along θ. At the final α every
- * root in c is examined and the smallest capacity governs (§7.6). The capacity is the
- * magnitude φ √(Mnx² + Mny²). If the local iteration fails, α is scanned round the full
- * circle and the smallest capacity among the solutions governs; a direction no neutral
- * axis can produce at this Pu has zero capacity.
+ * φPn(c) = Pu; α is iterated (secant steps, bisection-safeguarded once bracketed,
+ * |Δθ| ≤ 1e-11 rad) until the nominal moment vector (Mnx, Mny) points along θ. At the
+ * final α the other
+ * roots in c are sought outward from the one found (φPn rises with c between
+ * displaced-concrete steps, so the search stops once no step can bring φPn back to Pu);
+ * if a smaller one exists, its branch is followed in α to θ as well and the smaller
+ * capacity governs (§7.6). The capacity is the magnitude φ √(Mnx² + Mny²). If the local
+ * iteration fails, α is scanned round the full circle and the smallest capacity among
+ * the solutions governs; a direction no neutral axis can produce at this Pu (a strongly
+ * unsymmetric section under high axial load) has zero capacity.
+ *
+ * Warm starts (last c, last tan α / tan θ, last slopes) are kept per section for speed;
+ * tolerances are tight enough that results do not depend on them beyond ~1e-10.
  *
  * For a symmetric section θ = 0 and θ = π/2 give exactly phiMnAt about x and about y.
  * Circles: see circleCapacityAt for the project's orientation rule (§7.5).
