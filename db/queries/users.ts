@@ -66,8 +66,11 @@ export async function renameUser(actor: SessionUser, name: string) {
   });
 }
 
-/** Changes the password after checking the current one; the audit row records the change, never a hash. */
-export async function changePassword(actor: SessionUser, currentPassword: string, newPassword: string) {
+/**
+ * Changes the password after checking the current one; the audit row records the change, never a
+ * hash. Returns the new hash so the caller can re-issue the current session.
+ */
+export async function changePassword(actor: SessionUser, currentPassword: string, newPassword: string): Promise<string> {
   const user = await findUserById(actor.id);
   if (!user) throw notFound("account not found");
   if (user.passwordHash && !(await verifyPassword(currentPassword, user.passwordHash))) {
@@ -93,4 +96,5 @@ export async function changePassword(actor: SessionUser, currentPassword: string
       tx,
     );
   });
+  return passwordHash;
 }

@@ -9,6 +9,7 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { findUserById } from "@/db/queries/users";
 import { authorizeEmailLink, authorizePassword } from "./credentials";
+import { passwordFingerprint } from "./session-version";
 
 /** Sessions end after 12 h without use (the cookie is re-issued while the app is in use). */
 export const SESSION_MAX_AGE_SECONDS = 12 * 60 * 60;
@@ -44,9 +45,11 @@ export const authOptions: NextAuthOptions = {
         token.sub = user.id;
         token.email = user.email;
         token.name = user.name;
+        token.pwv = passwordFingerprint((await findUserById(user.id))?.passwordHash);
       }
       // The account page renames the user and asks for a fresh session; read the name back from
-      // the database rather than trusting what the client sent.
+      // the database rather than trusting what the client sent. (The password fingerprint is never
+      // refreshed here, or an old session could revive itself after a password change.)
       if (trigger === "update" && token.sub) {
         const fresh = await findUserById(token.sub);
         if (fresh) token.name = fresh.name;
@@ -54,6 +57,7 @@ export const authOptions: NextAuthOptions = {
       return token;
     },
     async session({ session, token }) {
+      if (!(await sessionStillValid(token))) return { expires: session.expires };
       if (session.user && token.sub) {
         (session.user as { id?: string }).id = token.sub;
         session.user.name = typeof token.name === "string" ? token.name : session.user.name;
@@ -62,3 +66,10 @@ export const authOptions: NextAuthOptions = {
     },
   },
 };
+
+/** A token is valid only while its user exists and has not changed the password since it was issued. */
+export async function sessionStillValid(token: { sub?: string; pwv?: unknown } | null): Promise<boolean> {
+  if (!token?.sub || typeof token.pwv !== "string" || !/^[0-9a-f-]{36}$/i.test(token.sub)) return false;
+  const user = await findUserById(token.sub);
+  return user !== null && passwordFingerprint(user.passwordHash) === token.pwv;
+}

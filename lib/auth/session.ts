@@ -7,7 +7,7 @@
 import { getServerSession } from "next-auth";
 import { getToken, type JWT } from "next-auth/jwt";
 import type { NextRequest } from "next/server";
-import { authOptions, authSecret } from "./options";
+import { authOptions, authSecret, sessionStillValid } from "./options";
 import type { SessionUser } from "./session-user";
 
 function userFromToken(token: JWT | null): SessionUser | null {
@@ -16,7 +16,10 @@ function userFromToken(token: JWT | null): SessionUser | null {
 }
 
 export async function getSessionUser(req?: NextRequest): Promise<SessionUser | null> {
-  if (req) return userFromToken(await getToken({ req, secret: authSecret() }));
+  if (req) {
+    const token = await getToken({ req, secret: authSecret() });
+    return token && (await sessionStillValid(token)) ? userFromToken(token) : null;
+  }
   const session = await getServerSession(authOptions);
   const user = session?.user as { id?: string; email?: string | null; name?: string | null } | undefined;
   if (!user?.id || !user.email) return null;

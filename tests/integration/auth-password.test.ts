@@ -5,7 +5,8 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { and, eq } from "drizzle-orm";
 import { closeDb, testDb } from "./support/database";
-import { callRoute } from "./support/session";
+import { callRoute, sessionCookieFor, sessionCookieName } from "./support/session";
+import { GET as accountGet } from "@/app/api/auth/account/route";
 import { createTestUser, uniqueEmail } from "./support/fixtures";
 import { auditLog, signInAttempts, users } from "@/db/schema";
 import { authorizePassword, RATE_LIMITED } from "@/lib/auth/credentials";
@@ -62,6 +63,24 @@ describe("POST /api/auth/password", () => {
     const [row] = await testDb().select().from(users).where(eq(users.id, user.id));
     expect(JSON.stringify(audit)).not.toContain(row?.passwordHash ?? "never");
     expect(JSON.stringify(audit)).not.toContain("braced-frame");
+  });
+
+  it("ends every session issued before the change and re-issues the changer's own", async () => {
+    const user = await createTestUser("sessions");
+    const otherDevice = await sessionCookieFor(user);
+    expect((await callRoute(accountGet, "/api/auth/account", { cookie: otherDevice })).status).toBe(200);
+    const res = await callRoute(changePasswordRoute, "/api/auth/password", {
+      method: "POST", cookie: otherDevice, body: { currentPassword: user.password, newPassword: "shear-wall-boundary-64" },
+    });
+    expect(res.status).toBe(200);
+    expect((await callRoute(accountGet, "/api/auth/account", { cookie: otherDevice })).status).toBe(401);
+
+    const setCookie = res.response.headers.get("set-cookie") ?? "";
+    expect(setCookie).toMatch(new RegExp(`^${sessionCookieName()}=`));
+    expect(setCookie).toMatch(/HttpOnly/i);
+    expect(setCookie).toMatch(/SameSite=lax/i);
+    const fresh = setCookie.split(";")[0] ?? "";
+    expect((await callRoute(accountGet, "/api/auth/account", { cookie: fresh })).status).toBe(200);
   });
 
   it("refuses a wrong current password (422), a reused one and a weak one (400), each on its field", async () => {

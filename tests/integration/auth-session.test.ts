@@ -26,6 +26,15 @@ describe("getSessionUser(req)", () => {
     expect((await callRoute(accountGet, "/api/auth/account", { cookie: forged })).status).toBe(401);
   });
 
+  it("refuses a session whose user no longer exists or whose password has changed since", async () => {
+    const user = await createTestUser("gone");
+    const stale = await sessionCookieFor(user, { passwordHash: "$2b$10$an-older-hash-than-the-current-one" });
+    expect(await getSessionUser(await buildRequest("/api/auth/account", { cookie: stale }))).toBeNull();
+    const live = await sessionCookieFor(user);
+    await testDb().delete(users).where(eq(users.id, user.id));
+    expect(await getSessionUser(await buildRequest("/api/auth/account", { cookie: live }))).toBeNull();
+  });
+
   it("uses JWT sessions that expire after 12 hours in http-only cookies", () => {
     expect(authOptions.session?.strategy).toBe("jwt");
     expect(SESSION_MAX_AGE_SECONDS).toBe(12 * 3600);

@@ -6,23 +6,25 @@
  *   const res = await callRoute(GET, "/api/workspaces/ID/members", { user, params: { workspaceId: "ID" } });
  *   expect(res.status).toBe(200);
  */
-import { encode } from "next-auth/jwt";
 import { NextRequest } from "next/server";
-import { authSecret, SESSION_MAX_AGE_SECONDS } from "@/lib/auth/options";
+import { encodeSessionToken, sessionCookieName } from "@/lib/auth/session-cookie";
+import { SESSION_MAX_AGE_SECONDS } from "@/lib/auth/options";
+import { findUserById } from "@/db/queries/users";
 import type { SessionUser } from "@/lib/auth/session-user";
 
-export function sessionCookieName(): string {
-  // next-auth's own rule: __Secure- prefixed cookies when the app is served over https
-  return (process.env.NEXTAUTH_URL ?? "").startsWith("https://") ? "__Secure-next-auth.session-token" : "next-auth.session-token";
-}
+export { sessionCookieName };
 
-/** `name=value` of a session cookie for this user, signed with the app's secret. */
-export async function sessionCookieFor(user: SessionUser, options: { maxAgeSeconds?: number; secret?: string } = {}): Promise<string> {
-  const value = await encode({
-    token: { sub: user.id, email: user.email, name: user.name },
-    secret: options.secret ?? authSecret(),
-    maxAge: options.maxAgeSeconds ?? SESSION_MAX_AGE_SECONDS,
-  });
+/**
+ * `name=value` of a session cookie for this user, signed with the app's secret. It carries the
+ * fingerprint of the user's current password hash (read from the database), as a real sign-in does,
+ * so it stops working once the password changes. `passwordHash` overrides that (e.g. a stale one).
+ */
+export async function sessionCookieFor(
+  user: SessionUser,
+  options: { maxAgeSeconds?: number; secret?: string; passwordHash?: string | null } = {},
+): Promise<string> {
+  const passwordHash = options.passwordHash !== undefined ? options.passwordHash : ((await findUserById(user.id))?.passwordHash ?? null);
+  const value = await encodeSessionToken(user, passwordHash, options.maxAgeSeconds ?? SESSION_MAX_AGE_SECONDS, options.secret);
   return `${sessionCookieName()}=${value}`;
 }
 
