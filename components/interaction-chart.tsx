@@ -59,7 +59,7 @@ export function InteractionChart({ axis, nominal, design, loads, units = "US", t
     return {
       animation: false,
       title: title ? { text: title, left: 0, textStyle: { fontSize: 13, fontWeight: 600, color: INK } } : undefined,
-      grid: { left: 64, right: 20, top: title ? 40 : 20, bottom: 48 },
+      grid: { left: 64, right: 24, top: title ? 64 : 40, bottom: 44 },
       tooltip: {
         trigger: "item",
         formatter: (p: { seriesName: string; data: unknown; name?: string }) => {
@@ -69,7 +69,7 @@ export function InteractionChart({ axis, nominal, design, loads, units = "US", t
           return `${label}<br/>M = ${Number(v[0]).toFixed(1)} ${mUnit}<br/>P = ${Number(v[1]).toFixed(1)} ${pUnit}`;
         },
       },
-      legend: { bottom: 0, textStyle: { fontSize: 11 } },
+      legend: { top: title ? 24 : 0, textStyle: { fontSize: 11 } },
       xAxis: { type: "value", name: `M${axis} (${mUnit})`, nameLocation: "middle", nameGap: 28, min: 0, splitLine: { lineStyle: { color: "#ece8dd" } } },
       yAxis: { type: "value", name: `P (${pUnit})`, nameLocation: "middle", nameGap: 48, splitLine: { lineStyle: { color: "#ece8dd" } } },
       series: [

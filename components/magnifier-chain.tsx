@@ -86,10 +86,10 @@ export function MagnifierChain(props: MagnifierChainProps) {
       <tbody>
         {steps.map((s) => (
           <tr key={s.symbol} className="border-b border-stone-100 align-top">
-            <th scope="row" className="py-1 pr-2 text-left font-mono font-normal">
+            <th scope="row" className="whitespace-nowrap py-1 pr-2 text-left font-mono font-normal">
               {s.symbol}
             </th>
-            <td className={`py-1 pr-2 tabular-nums ${s.flag ? "font-semibold text-strained-600" : ""}`}>{s.value}</td>
+            <td className={`whitespace-nowrap py-1 pr-2 tabular-nums ${s.flag ? "font-semibold text-strained-600" : ""}`}>{s.value}</td>
             <td className="py-1 pr-2 text-ink-700">{s.rule}</td>
             <td className="py-1 whitespace-nowrap text-ink-500">ACI 318-19 {s.clause}</td>
           </tr>

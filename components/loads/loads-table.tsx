@@ -223,7 +223,7 @@ export function LoadsTable({ markId, loads, units, braced, canEdit, onChanged }:
 
   return (
     <div className="overflow-x-auto">
-      <table ref={tableRef} className="w-full min-w-[56rem] border-collapse text-sm" aria-label="Load combinations">
+      <table ref={tableRef} className="w-full min-w-[68rem] border-collapse text-sm" aria-label="Load combinations">
         <thead>
           {table.getHeaderGroups().map((g) => (
             <tr key={g.id} className="border-b border-stone-200 text-left align-bottom text-ink-700">

@@ -196,9 +196,9 @@ function CheckViewInner({ workspaceId, projectId, markId }: CheckViewProps) {
         </p>
       </section>
 
-      <div className="grid gap-6 lg:grid-cols-[1fr_2fr] print:grid-cols-[1fr_2fr]">
-        <section aria-label="Section" className="panel break-inside-avoid">
-          <h2 className="font-semibold">Section</h2>
+      <section aria-label="Section" className="panel break-inside-avoid">
+        <h2 className="font-semibold">Section</h2>
+        <div className="mt-2 flex flex-wrap items-start gap-8">
           <SectionSketch
             shape={section.shape}
             b={section.b}
@@ -211,36 +211,42 @@ function CheckViewInner({ workspaceId, projectId, markId }: CheckViewProps) {
             units={units}
             title={`Section of ${label}`}
           />
-          <dl className="mt-2 grid grid-cols-2 gap-x-3 text-sm">
+          <dl className="grid grid-cols-[auto_auto] gap-x-4 gap-y-1 text-sm">
             <dt className="text-ink-500">Ag</dt>
             <dd className="tabular-nums">{formatQuantity(out.section.Ag, "area", units)}</dd>
             <dt className="text-ink-500">Ast</dt>
             <dd className="tabular-nums">{formatQuantity(out.section.Ast, "area", units)}</dd>
             <dt className="text-ink-500">ρ = Ast/Ag</dt>
             <dd className="tabular-nums">{formatNumber(out.section.rho, 4)}</dd>
-            <dt className="text-ink-500">P0</dt>
+            <dt className="text-ink-500">P0 (22.4.2.2)</dt>
             <dd className="tabular-nums">{formatQuantity(out.section.P0, "force", units)}</dd>
-            <dt className="text-ink-500">φPn,max</dt>
+            <dt className="text-ink-500">φPn,max (Table 22.4.2.1)</dt>
             <dd className="tabular-nums">{formatQuantity(out.section.phiPnMax, "force", units)}</dd>
             <dt className="text-ink-500">f′c, fy</dt>
             <dd className="tabular-nums">
               {formatQuantity(section.fc, "stress", units)}, {formatQuantity(section.fy, "stress", units)}
             </dd>
+            <dt className="text-ink-500">Confinement</dt>
+            <dd>
+              {section.confinement === "spiral" ? "spiral" : "ties"}
+              {tieRule ? ` (${formatQuantity(tieRule.value, "length", units)} bar)` : ""}
+            </dd>
           </dl>
-        </section>
-        <section aria-label="Interaction diagrams" className="panel grid gap-4 md:grid-cols-2 print:grid-cols-2">
-          {(["x", "y"] as const).map((axis) => {
-            const d = axis === "x" ? diagramX : diagramY;
-            return d.isError ? (
-              <p key={axis} role="alert">
-                The diagram about {axis} could not be drawn: {d.error.message}
-              </p>
-            ) : (
-              <InteractionChart key={axis} axis={axis} {...curves(d.data)} loads={points(axis)} units={units} title={`Interaction diagram, bending about ${axis}`} height={340} />
-            );
-          })}
-        </section>
-      </div>
+        </div>
+      </section>
+
+      <section aria-label="Interaction diagrams" className="panel grid gap-6 lg:grid-cols-2 print:grid-cols-2">
+        {(["x", "y"] as const).map((axis) => {
+          const d = axis === "x" ? diagramX : diagramY;
+          return d.isError ? (
+            <p key={axis} role="alert">
+              The diagram about {axis} could not be drawn: {d.error.message}
+            </p>
+          ) : (
+            <InteractionChart key={axis} axis={axis} {...curves(d.data)} loads={points(axis)} units={units} title={`Interaction diagram, bending about ${axis}`} height={400} />
+          );
+        })}
+      </section>
 
       <section aria-label="Load combinations checked" className="panel">
         <h2 className="font-semibold">Load combinations</h2>

@@ -38,6 +38,8 @@ export interface MarkFormProps {
   mark?: MarkRecord;
   canEdit: boolean;
   onSaved?: (mark: MarkRecord) => void;
+  /** the parent saw this version saved (the form remounts per version, so it cannot remember) */
+  justSaved?: boolean;
 }
 
 export function newMarkDraft(cover: number): MarkDraft {
@@ -58,6 +60,20 @@ function draftOf(mark: MarkRecord): MarkDraft {
   return { label: mark.label, level: mark.level, quantity: mark.quantity, member: mark.member, limits: mark.limits, design: mark.design };
 }
 
+/** The current design against the architect's limits (a warning: the check itself does not use them). */
+function limitWarnings(d: MarkDraft): string[] {
+  const s = d.design.section;
+  const l = d.limits;
+  const why = l.note ? ` (${l.note})` : "";
+  const out: string[] = [];
+  if (s.shape === "rect") {
+    if (l.maxB !== undefined && (s.b ?? 0) > l.maxB) out.push(`b = ${s.b} in is over the largest b of ${l.maxB} in${why}.`);
+    if (l.maxH !== undefined && (s.h ?? 0) > l.maxH) out.push(`h = ${s.h} in is over the largest h of ${l.maxH} in${why}.`);
+    if (l.squareOnly && s.b !== s.h) out.push(`The section is not square${why}.`);
+  } else if (l.maxD !== undefined && (s.D ?? 0) > l.maxD) out.push(`D = ${s.D} in is over the largest D of ${l.maxD} in${why}.`);
+  return out;
+}
+
 const CONFLICT_FIELDS = [
   { key: "label", label: "Mark" },
   { key: "level", label: "Level" },
@@ -67,7 +83,7 @@ const CONFLICT_FIELDS = [
   { key: "design", label: "Current design" },
 ];
 
-export function MarkForm({ projectId, workspaceId, units, defaults, mark, canEdit, onSaved }: MarkFormProps) {
+export function MarkForm({ projectId, workspaceId, units, defaults, mark, canEdit, onSaved, justSaved }: MarkFormProps) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const [draft, setDraft, clearDraft, restored] = useDraft<MarkDraft>(mark ? `mark:${mark.id}` : `new-mark:${projectId}`, mark ? draftOf(mark) : newMarkDraft(defaults.cover), mark?.version ?? 0);
@@ -270,6 +286,11 @@ export function MarkForm({ projectId, workspaceId, units, defaults, mark, canEdi
         <section className="panel space-y-4" aria-label="Current design">
           <h2 className="font-semibold">Current design</h2>
           <p className="text-sm text-ink-500">{describeSection(s, units)}</p>
+          {limitWarnings(draft).map((w) => (
+            <p key={w} className="text-sm font-medium text-strained-600">
+              {w}
+            </p>
+          ))}
           <div className="grid gap-4 sm:grid-cols-4">
             <div>
               <label htmlFor="mk-shape" className="field-label">
@@ -399,7 +420,11 @@ export function MarkForm({ projectId, workspaceId, units, defaults, mark, canEdi
           <button type="submit" className="btn-primary" disabled={save.isPending}>
             {save.isPending ? "Saving…" : mark ? "Save the mark" : "Create the mark"}
           </button>
-          {savedAt && !save.isPending && !save.isError ? <span className="text-sm text-sound-600">Saved.</span> : null}
+          {(savedAt || justSaved) && !save.isPending && !save.isError ? (
+            <span role="status" className="text-sm text-sound-600">
+              Saved.
+            </span>
+          ) : null}
         </div>
       ) : (
         <p className="text-sm text-ink-500">Your role reads column marks; owners and engineers change them.</p>

@@ -1,6 +1,7 @@
 "use client";
 /** A mark's screen: its data and current design, its load combinations (table and CSV upload), and the way to its check. */
 import Link from "next/link";
+import { useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { callApi } from "@/components/projects/api";
 import { QueryBoundary } from "@/components/projects/query-boundary";
@@ -35,6 +36,7 @@ export function MarkPage(props: MarkPageProps) {
 function MarkPageInner({ workspaceId, projectId, markId }: MarkPageProps) {
   const queryClient = useQueryClient();
   const query = useQuery({ queryKey: ["mark", markId], queryFn: () => callApi<MarkResponse>(`/api/marks/${markId}`) });
+  const [savedVersion, setSavedVersion] = useState<number | null>(null);
   if (query.isPending) return <p className="text-ink-500">Loading the mark…</p>;
   if (query.isError) return <p role="alert">The mark could not be loaded: {query.error.message}</p>;
   const { mark, loads, project, can } = query.data;
@@ -60,7 +62,14 @@ function MarkPageInner({ workspaceId, projectId, markId }: MarkPageProps) {
           </Link>
         </div>
       </div>
-      <MarkForm key={mark.version} projectId={projectId} workspaceId={workspaceId} units={project.units} defaults={{ cover: project.cover }} mark={mark} canEdit={can.editMarks} onSaved={refresh} />
+      <MarkForm key={mark.version} projectId={projectId} workspaceId={workspaceId} units={project.units} defaults={{ cover: project.cover }} mark={mark}
+        canEdit={can.editMarks}
+        justSaved={savedVersion === mark.version}
+        onSaved={(saved) => {
+          setSavedVersion(saved.version);
+          refresh();
+        }}
+      />
       <section aria-labelledby="loads-heading" className="space-y-4">
         <h2 id="loads-heading" className="text-lg font-semibold">
           Load combinations

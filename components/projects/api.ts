@@ -2,21 +2,24 @@
  * The browser side of our REST routes: JSON in and out, typed errors that keep the server's
  * field issues (shown beside the field) and, on 409, the current record (shown as what changed).
  */
+import { ApiError as SharedApiError } from "@/components/providers";
+
 export interface FieldIssue {
   path: string;
   message: string;
 }
 
-export class ApiError extends Error {
+/** The app-wide ApiError (components/providers.tsx, which skips retries on 4xx) plus the full response body. */
+export class ApiError extends SharedApiError {
+  declare readonly issues: FieldIssue[];
   constructor(
-    readonly status: number,
+    status: number,
     message: string,
-    readonly issues: FieldIssue[],
-    readonly current: unknown,
+    issues: FieldIssue[],
+    current: unknown,
     readonly body: unknown,
   ) {
-    super(message);
-    this.name = "ApiError";
+    super(status, message, issues, current);
   }
 }
 

@@ -1,7 +1,6 @@
 import type { ReactNode } from "react";
 import { ProjectHeader } from "@/components/projects/project-header";
 import { QueryBoundary } from "@/components/projects/query-boundary";
-import { CAUTION } from "@/lib/caution";
 
 export default async function ProjectLayout({ children, params }: { children: ReactNode; params: Promise<{ workspaceId: string; projectId: string }> }) {
   const { workspaceId, projectId } = await params;
@@ -10,7 +9,6 @@ export default async function ProjectLayout({ children, params }: { children: Re
       <div className="mx-auto max-w-6xl px-6 py-6 print:max-w-none print:px-0">
         <ProjectHeader workspaceId={workspaceId} projectId={projectId} />
         {children}
-        <p className="mt-10 border-t border-stone-200 pt-3 text-xs text-ink-500">{CAUTION}</p>
       </div>
     </QueryBoundary>
   );
