@@ -8,15 +8,21 @@
  * EI = EI0 / (1 + βdns), EI0 = 0.4 Ec Ig or 0.2 Ec Ig + Es Ise, Pc = π² EI / (k ℓu)² with ℓu of
  * one segment; an axis with k ℓu/r > 40 is slender whatever the end moments (the braced limit
  * 34 + 12 M1/M2 never exceeds 40, 6.2.5.1), and with option (a)/(b) EI does not depend on the
- * moment, so the M2,min variant is as unstable as the given one. A 1e-9 margin keeps round-off
+ * moment, so the M2,min variant is as unstable as the given one.
+ *
+ * It also proves the 1.4 cap exceeded (6.2.5.3) where M2,min governs a segment
+ * (M2 < Pu(0.6 + 0.03h), 6.6.4.5.4): that variant has Cm = 1.0, first-order moment M2,min and
+ * δ = 1/(1 − Pu/(0.75 Pc)), so δ > 1.4 fails the case. A 1e-9 margin keeps round-off
  * on the safe side: a candidate this calls unstable is one the engine fails
  * (tests/unit/optimizer-space.test.ts checks it over whole spaces). Anything else is left to
  * the engine.
  */
-import { concreteModulus, ES } from "../engine";
+import { computeMinimumMoment, computeSegmentEndMoments, concreteModulus, ES, type SegmentEndMoments } from "../engine";
+import type { EndMoments } from "../engine/types";
 import type { Family, SearchProblem, Valued } from "./search-space";
 
 const MARGIN = 1e-9;
+const seg: SegmentEndMoments = { M1: 0, M2: 0, curvature: "single" };
 
 function spread(lo: number, hi: number, n: number): number[] {
   if (n === 1) return [(lo + hi) / 2];
@@ -84,6 +90,19 @@ export function proveUnstable(problem: SearchProblem, fam: Family, layoutIndex: 
       if (load === undefined || !(load.Pu > 0)) continue;
       const Pc = (EI0 / (1 + load.betaDns)) * pcFactor;
       if (load.Pu >= 0.75 * Pc * (1 + MARGIN)) return i;
+      // the M2,min variant of a segment where it governs: δ = 1 / (1 − Pu / 0.75 Pc)
+      const delta = 1 / (1 - load.Pu / (0.75 * Pc));
+      if (!(delta > 1.4 * (1 + MARGIN))) continue;
+      const M2min = computeMinimumMoment(load.Pu, depth);
+      if (!(M2min > 1e-6)) continue;
+      const em: EndMoments | undefined = axis === "x" ? load.Mx : load.My;
+      const M1 = em?.M1 ?? 0;
+      const M2 = em?.M2 ?? 0;
+      const curvature = em?.curvature ?? "double";
+      for (let sIdx = 0; sIdx < segments; sIdx++) {
+        computeSegmentEndMoments(M1, M2, curvature, braceLevels, sIdx, seg);
+        if (seg.M2 < M2min * (1 - MARGIN)) return i;
+      }
     }
   }
   return -1;

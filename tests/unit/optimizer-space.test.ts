@@ -172,12 +172,12 @@ describe("candidate ids", () => {
   });
 });
 
-describe("proof of instability without the engine", () => {
+describe("proof of a failing load case without the engine", () => {
   for (const [label, member, ei] of [
     ["EI option (b), 23 ft, k = 1", { lu: 276, kx: 1, ky: 1, braced: true }, "b"],
     ["EI option (a), weak-axis strut ℓuy", { lu: 300, luy: 200, kx: 1.2, ky: 0.9, braced: true }, "a"],
   ] as const) {
-    it(`only ever calls unstable what the engine fails as unstable (${label})`, () => {
+    it(`only ever proves a failure (instability or the 1.4 cap) the engine also finds (${label})`, () => {
       const problem = problemOf(
         { b: [12, 24, 4], h: [12, 24, 4], D: [12, 24, 4], fc: [4, 8], sizes: ["#6", "#9"], braceLevels: [0, 1, 2], confinement: ["tied", "spiral"] },
         { member, options: { ei } },
