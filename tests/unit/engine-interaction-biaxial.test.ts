@@ -29,7 +29,7 @@ function contourCapacity(section: ResolvedSection, Pu: number, theta: number, st
     const alpha = theta - Math.PI / 2 + (Math.PI * i) / steps;
     let lo = 1e-9;
     let hi = 500;
-    for (let j = 0; j < 100; j++) {
+    for (let j = 0; j < 64; j++) {
       const mid = (lo + hi) / 2;
       const f = sectionForcesAt(section, alpha, mid);
       if (f.phi * f.Pn < Pu) lo = mid;
@@ -130,6 +130,16 @@ describe("phiMnAtAngle — rectangular sections", () => {
     const f = sectionForcesAt(W, ok.alpha, ok.c);
     expect(Math.atan2(f.Mny, f.Mnx)).toBeCloseTo(0.2, 6);
     expect(rel(ok.phiMn, contourCapacity(W, 300, 0.2))).toBeLessThan(2e-3);
+  });
+  it("handles many bars and a slender rectangle (extreme inputs) against the independent sweep", () => {
+    const many = resolveSection({ ...base, b: 36, h: 36, layout: { type: "perimeter", size: "#10", nb: 11, nh: 11 } });
+    expect(many.bars).toHaveLength(40);
+    expect(rel(phiMnAtAngle(many, 1500, 0.6)?.phiMn ?? 0, contourCapacity(many, 1500, 0.6, 720))).toBeLessThan(2e-3);
+    const wall = resolveSection({ ...base, b: 48, h: 10, layout: { type: "faces", size: "#6", n: 8 } });
+    // a wide section turns the moment fast with α (tan α ≈ tan θ · Ix/Iy = 0.11 tan θ):
+    // a fine sweep keeps the reference's interpolation error small
+    expect(rel(phiMnAtAngle(wall, 200, 1.2)?.phiMn ?? 0, contourCapacity(wall, 200, 1.2, 20000))).toBeLessThan(2e-3);
+    expect(rel(phiMnAtAngle(wall, 0, 0.05)?.phiMn ?? 0, contourCapacity(wall, 0, 0.05, 20000))).toBeLessThan(2e-3);
   });
   it("does not depend on earlier calls (warm starts are only a speed aid)", () => {
     const fresh = (Pu: number, t: number): number => phiMnAtAngle(resolveSection(base), Pu, t)?.phiMn ?? 0;
