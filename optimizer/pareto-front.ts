@@ -139,6 +139,12 @@ export class Staircase {
    * b < bLow.
    */
   dominatesAll(a: number, bLow: number): boolean {
+    // fast path for a sweep in cost order: usually every known point is cheaper than `a`,
+    // and then the last point (the smallest b) decides
+    const n = this.as.length;
+    if (n === 0) return false;
+    const lastA = this.as[n - 1] as number;
+    if (lastA < a) return (this.bs[n - 1] as number) <= bLow;
     return this.minBBelow(a) <= bLow || this.minBAtOrBelow(a) < bLow;
   }
 

@@ -24,14 +24,7 @@ import type { Family, SearchProblem, Valued } from "./search-space";
 const MARGIN = 1e-9;
 const seg: SegmentEndMoments = { M1: 0, M2: 0, curvature: "single" };
 
-function spread(lo: number, hi: number, n: number): number[] {
-  if (n === 1) return [(lo + hi) / 2];
-  const out: number[] = [];
-  for (let i = 0; i < n; i++) out.push(lo + ((hi - lo) * i) / (n - 1));
-  return out;
-}
-
-/** Ise about x and y of one layout (Σ A y², Σ A x²), in⁴. */
+/** Ise about x and y of one layout (Σ A y², Σ A x²) at the engine's bar positions, in⁴. */
 export function steelInertiaOf(problem: SearchProblem, fam: Family, layoutIndex: number): [number, number] {
   const [a, b] = fam.layouts[layoutIndex] as [number, number];
   const edge = problem.cover + fam.tieDb + fam.db / 2;
@@ -41,14 +34,14 @@ export function steelInertiaOf(problem: SearchProblem, fam: Family, layoutIndex:
   if (fam.shape === "rect") {
     const xe = fam.b / 2 - edge;
     const ye = fam.h / 2 - edge;
-    const xs = spread(-xe, xe, a);
-    const ys = spread(-ye, ye, b);
-    for (const x of xs) {
+    // positions as the layout spreads them: lo + (hi − lo)·i/(n − 1)
+    for (let i = 0; i < a; i++) {
+      const x = a === 1 ? 0 : -xe + (2 * xe * i) / (a - 1);
       ix += 2 * A * ye * ye;
       iy += 2 * A * x * x;
     }
     for (let j = 1; j <= b - 2; j++) {
-      const y = ys[j] as number;
+      const y = -ye + (2 * ye * j) / (b - 1);
       ix += 2 * A * y * y;
       iy += 2 * A * xe * xe;
     }
