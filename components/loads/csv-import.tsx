@@ -8,6 +8,7 @@ import { useId, useState } from "react";
 import { ApiError, callApi } from "@/components/projects/api";
 import { unitLabel, type UnitSystem } from "@/components/projects/units";
 import { loadCsvHeader } from "@/lib/csv/parse-load-csv";
+import { MARK_CSV_COLUMNS } from "@/lib/csv/parse-marks-csv";
 
 interface ReportRow {
   row: number;
@@ -36,9 +37,11 @@ export interface CsvImportProps {
   withMark: boolean;
   canImport: boolean;
   onImported: () => void;
+  /** what the file holds: load combinations (default) or column marks */
+  kind?: "loads" | "marks";
 }
 
-export function CsvImport({ endpoint, units, withMark, canImport, onImported }: CsvImportProps) {
+export function CsvImport({ endpoint, units, withMark, canImport, onImported, kind = "loads" }: CsvImportProps) {
   const inputId = useId();
   const [file, setFile] = useState<{ name: string; content: string } | null>(null);
   const [report, setReport] = useState<Report | null>(null);
@@ -67,7 +70,8 @@ export function CsvImport({ endpoint, units, withMark, canImport, onImported }: 
     setMessage(null);
     try {
       const res = await callApi<{ report: Report }>(endpoint, { method: "POST", body: { filename: file.name, content: file.content, mode: "commit", replace, skipInvalid } });
-      setMessage(`Imported ${res.report.imported} load combination${res.report.imported === 1 ? "" : "s"}${res.report.skipped ? `; left out ${res.report.skipped} row${res.report.skipped === 1 ? "" : "s"} with errors` : ""}. The file is kept with the import.`);
+      const what = kind === "marks" ? "column mark" : "load combination";
+      setMessage(`Imported ${res.report.imported} ${what}${res.report.imported === 1 ? "" : "s"}${res.report.skipped ? `; left out ${res.report.skipped} row${res.report.skipped === 1 ? "" : "s"} with errors` : ""}. The file is kept with the import.`);
       setReport(null);
       setFile(null);
       onImported();
@@ -79,17 +83,25 @@ export function CsvImport({ endpoint, units, withMark, canImport, onImported }: 
     }
   }
 
-  const header = loadCsvHeader(units, withMark);
+  const header = kind === "marks" ? [...MARK_CSV_COLUMNS] : loadCsvHeader(units, withMark);
   const template = header.map((h) => h.replace(/ \(.*\)$/, "")).join(",");
+  const title = kind === "marks" ? "Upload column marks (CSV)" : withMark ? "Upload load combinations of several marks (CSV)" : "Upload load combinations (CSV)";
   const errorColumns = (r: ReportRow) => new Set(r.errors.map((e) => e.column));
 
   return (
-    <section className="panel space-y-3" aria-label={withMark ? "Upload the load combinations of several marks" : "Upload load combinations"}>
-      <h3 className="font-semibold">{withMark ? "Upload load combinations of several marks (CSV)" : "Upload load combinations (CSV)"}</h3>
-      <p className="text-xs text-ink-500">
-        First line: <code className="font-mono">{template}</code>. Pu in {unitLabel("force", units)}, moments in {unitLabel("moment", units)} as magnitudes with M1 ≤ M2,
-        curvature single or double, βdns 0–1 (blank = 0). My and the sway parts (Mx_M1s …) may be left out.
-      </p>
+    <section className="panel space-y-3" aria-label={kind === "marks" ? "Upload column marks" : withMark ? "Upload the load combinations of several marks" : "Upload load combinations"}>
+      <h3 className="font-semibold">{title}</h3>
+      {kind === "marks" ? (
+        <p className="text-xs text-ink-500">
+          First line: <code className="font-mono">{template}</code>. Lengths in {unitLabel("length", units)}, f′c and fy in {unitLabel("stress", units)}; braced or sway; shape rect or circle; nb × nh bars
+          around a rectangle (or n on the two faces normal to h), n around a circle. Blank cells take the defaults (k = 1, braced, cover from the project).
+        </p>
+      ) : (
+        <p className="text-xs text-ink-500">
+          First line: <code className="font-mono">{template}</code>. Pu in {unitLabel("force", units)}, moments in {unitLabel("moment", units)} as magnitudes with M1 ≤ M2,
+          curvature single or double, βdns 0–1 (blank = 0). My and the sway parts (Mx_M1s …) may be left out.
+        </p>
+      )}
       <div>
         <label htmlFor={inputId} className="field-label">
           CSV file
@@ -171,10 +183,10 @@ export function CsvImport({ endpoint, units, withMark, canImport, onImported }: 
           ) : null}
           {canImport && report.fileErrors.length === 0 && report.validRows > 0 ? (
             <div className="space-y-2 text-sm">
-              <fieldset className="flex flex-wrap gap-4">
+              <fieldset className={`flex flex-wrap gap-4 ${kind === "marks" ? "hidden" : ""}`}>
                 <legend className="sr-only">Existing combinations</legend>
                 <label className="flex items-center gap-2">
-                  <input type="radio" name={`${inputId}-mode`} checked={replace} onChange={() => setReplace(true)} /> Replace the existing combinations
+                  <input type="radio" name={`${inputId}-mode`} checked={replace} onChange={() => setReplace(true)} /> Replace the existing combinations of each mark
                 </label>
                 <label className="flex items-center gap-2">
                   <input type="radio" name={`${inputId}-mode`} checked={!replace} onChange={() => setReplace(false)} /> Add to them

@@ -27,6 +27,16 @@ function OverviewInner({ workspaceId, projectId }: ProjectOverviewProps) {
       <MarkList workspaceId={workspaceId} projectId={projectId} />
       {project.data ? (
         <CsvImport
+          kind="marks"
+          endpoint={`/api/projects/${projectId}/marks/import`}
+          units={project.data.project.units}
+          withMark
+          canImport={project.data.can.editMarks}
+          onImported={() => void queryClient.invalidateQueries({ queryKey: ["marks", projectId] })}
+        />
+      ) : null}
+      {project.data ? (
+        <CsvImport
           endpoint={`/api/projects/${projectId}/loads/import`}
           units={project.data.project.units}
           withMark
