@@ -135,7 +135,10 @@ export function runSearchTask(task: SearchTask, hooks: { onTick?: () => void; si
         if (fam === undefined || regionOf(fam) !== key) continue;
         // strongest: largest φPn,max, then more brace levels
         const phi = phiPnMaxOf(fam, table.layout[i] as number, (problem.fcs[table.fc[i] as number] as { v: number }).v) + (table.brace[i] as number) * 1e-6;
-        if (phi > bestPhi) (bestPhi = phi), (best = i);
+        if (phi > bestPhi) {
+          bestPhi = phi;
+          best = i;
+        }
       }
       const check: CheckOutput = checkCandidate(problem, table, best);
       outputChecks++;
