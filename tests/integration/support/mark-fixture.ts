@@ -33,13 +33,21 @@ export async function createSlenderMark(workspace?: TestWorkspace): Promise<Mark
     .insert(priceBooks)
     .values({ projectId: project.id, revision: 1, prices: TEST_PRICES, carbon: TEST_CARBON, formSet: 900 })
     .returning();
+  if (!book) throw new Error("price book insert failed");
+  const markId = await addMark(project.id, { label: "D-7", level: "Mezzanine", quantity: 3, Pu: 420 });
+  return { workspace: ws, projectId: project.id, markId, priceBookId: book.id };
+}
+
+/** Adds a mark of the same family (label, level, quantity and governing Pu varied) to a project. */
+export async function addMark(projectId: string, m: { label: string; level: string; quantity: number; Pu: number }): Promise<string> {
+  const db = getDb();
   const [mark] = await db
     .insert(columnMarks)
     .values({
-      projectId: project.id,
-      label: "D-7",
-      level: "Mezzanine",
-      quantity: 3,
+      projectId,
+      label: m.label,
+      level: m.level,
+      quantity: m.quantity,
       member: { lu: 264, kx: 1, ky: 1, braced: true },
       limits: {},
       design: {
@@ -48,12 +56,12 @@ export async function createSlenderMark(workspace?: TestWorkspace): Promise<Mark
       },
     })
     .returning();
-  if (!book || !mark) throw new Error("fixture insert failed");
+  if (!mark) throw new Error("mark insert failed");
   await db.insert(loadCombinations).values([
-    { markId: mark.id, position: 0, name: "1.2D+1.6L", Pu: 420, betaDns: 0.6, Mx: { M1: 500, M2: 900, curvature: "single" } },
+    { markId: mark.id, position: 0, name: "1.2D+1.6L", Pu: m.Pu, betaDns: 0.6, Mx: { M1: 500, M2: 900, curvature: "single" } },
     { markId: mark.id, position: 1, name: "1.2D+1.0W+1.0L", Pu: 330, betaDns: 0.4, Mx: { M1: 300, M2: 1100, curvature: "double" }, My: { M1: 0, M2: 250, curvature: "single" } },
   ]);
-  return { workspace: ws, projectId: project.id, markId: mark.id, priceBookId: book.id };
+  return mark.id;
 }
 
 /** A small search space so a full search takes well under a second. */
