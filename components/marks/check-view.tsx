@@ -292,6 +292,14 @@ function CheckViewInner({ workspaceId, projectId, markId }: CheckViewProps) {
               <MagnifierChain key={axis} result={selected} axis={axis} braced={out.assumptions.braced} ei={out.assumptions.ei} k={axis === "x" ? out.assumptions.kx : out.assumptions.ky} units={units} />
             ))}
           </div>
+          {selected.biaxial ? (
+            <p className={`mt-3 text-sm ${selected.biaxial.ratio > 1 ? "font-semibold text-strained-600" : ""}`} data-testid="biaxial-step">
+              Both axes at once: resultant magnified moment √(Mcx² + Mcy²) ={" "}
+              {formatQuantity(Math.hypot(selected.biaxial.Mcx, selected.biaxial.Mcy), "moment", units)} at θ = {formatNumber(selected.biaxial.theta, 1)}° against φMn ={" "}
+              {formatQuantity(selected.biaxial.phiMn, "moment", units)} in that direction at Pu (neutral axis rotated, strain compatibility): ratio {formatNumber(selected.biaxial.ratio, 3)}
+              {selected.biaxial.ratio > 1 ? " — fails" : " — passes"}.
+            </p>
+          ) : null}
         </section>
       ) : null}
 
