@@ -18,6 +18,7 @@ export function ProjectHeader({ workspaceId, projectId }: ProjectHeaderProps) {
     { href: `${base}/settings`, label: "Project settings" },
     { href: `${base}/price-book`, label: "Price book" },
     { href: `${base}/schedule`, label: "Column schedule" },
+    { href: `${base}/form-reuse`, label: "Form reuse" },
   ];
   return (
     <header className="mb-6 border-b border-stone-200 pb-3">
