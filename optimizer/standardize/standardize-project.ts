@@ -36,6 +36,11 @@ export interface StandardizeSolveOptions {
   timeoutMs?: number;
   /** largest variables × constraints handed to the solver in "auto" (default MAX_TABLEAU) */
   maxTableau?: number;
+  /**
+   * time limit of the branch and bound, ms (default 30 000); past it the best assignment found is
+   * returned with `stats.optimal: false` and the proven lower bound
+   */
+  branchAndBoundTimeoutMs?: number;
 }
 
 /** Outline sets worth starting from (e.g. the optimum for a smaller N). */
@@ -241,6 +246,7 @@ export function solvePrepared<C extends StandardizeCandidate>(
   const nO = p.outlines.length;
   const method = options.method ?? "auto";
   const elapsed = () => performance.now() - t0;
+  const bbLimit = options.branchAndBoundTimeoutMs ?? 30_000;
 
   const structural = findStructuralReasons(p, input);
   if (structural.length > 0) return infeasibleResult(p, input, structural, null, emptyStats("none", Math.round(elapsed() * 10) / 10, p));
@@ -286,7 +292,7 @@ export function solvePrepared<C extends StandardizeCandidate>(
     if (ip.feasible) adopt(ip.open);
     proven = true;
   } else if (method === "branch-and-bound") {
-    const bb = solveByBranchAndBound(p, rc, N, { set: best.uncovered === 0 ? best.used : null, totalCents: incumbentCents() });
+    const bb = solveByBranchAndBound(p, rc, N, { set: best.uncovered === 0 ? best.used : null, totalCents: incumbentCents() }, { timeLimitMs: bbLimit });
     if (bb.set !== null) adopt(bb.set);
     stats.nodes = bb.nodes;
     proven = bb.finished;
@@ -318,7 +324,7 @@ export function solvePrepared<C extends StandardizeCandidate>(
       } else {
         // time limit reached, or the model too large for the dense simplex
         stats.method = "branch-and-bound";
-        const bb = solveByBranchAndBound(p, rc, N, { set: best.uncovered === 0 ? best.used : null, totalCents: incumbentCents() }, { state });
+        const bb = solveByBranchAndBound(p, rc, N, { set: best.uncovered === 0 ? best.used : null, totalCents: incumbentCents() }, { state, timeLimitMs: bbLimit });
         if (bb.set !== null) adopt(bb.set);
         stats.nodes = bb.nodes;
         proven = bb.finished;

@@ -217,6 +217,15 @@ describe("properties of the optimum", () => {
     }
   });
 
+  it("an exact bound proves at once: no form-set cost and N = marks settles at the root of the branch and bound", () => {
+    const input = { ...inventProject({ seed: 1, marks: 30, outlinesPerMark: 40 }), formSetCost: 0, maxOutlines: 30 };
+    const r = standardizeProject(input, { method: "branch-and-bound", branchAndBoundTimeoutMs: 5000 });
+    expect(r.stats.optimal).toBe(true);
+    expect(r.stats.nodes).toBe(1);
+    const own = input.marks.reduce((sum, m) => sum + Math.min(...m.candidates.filter(passes).map((c) => Math.round(c.cost * m.quantity * 100))), 0);
+    expect(Math.round((r.totalCost ?? 0) * 100)).toBe(own);
+  });
+
   it("total cost never rises as N grows, and the sweep agrees with single solves", () => {
     for (const seed of [6, 7]) {
       for (const formSetCost of [0, 2500]) {
