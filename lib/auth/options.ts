@@ -8,7 +8,7 @@
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { findUserById } from "@/db/queries/users";
-import { authorizeEmailLink, authorizePassword } from "./credentials";
+import { authorizeEmailLink, authorizePassword, clientAddressOf } from "./credentials";
 import { passwordFingerprint } from "./session-version";
 
 /** Sessions end after 12 h without use (the cookie is re-issued while the app is in use). */
@@ -30,7 +30,7 @@ export const authOptions: NextAuthOptions = {
       id: "password",
       name: "E-mail and password",
       credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
-      authorize: (raw) => authorizePassword(raw),
+      authorize: (raw, req) => authorizePassword(raw, clientAddressOf(req?.headers)),
     }),
     CredentialsProvider({
       id: "email-link",

@@ -9,8 +9,8 @@ import { callRoute, sessionCookieFor, sessionCookieName } from "./support/sessio
 import { GET as accountGet } from "@/app/api/auth/account/route";
 import { createTestUser, uniqueEmail } from "./support/fixtures";
 import { auditLog, signInAttempts, users } from "@/db/schema";
-import { authorizePassword, RATE_LIMITED } from "@/lib/auth/credentials";
-import { ATTEMPT_WINDOW_MS, MAX_FAILED_ATTEMPTS } from "@/db/queries/sign-in-attempts";
+import { authorizePassword, clientAddressOf, RATE_LIMITED } from "@/lib/auth/credentials";
+import { ATTEMPT_WINDOW_MS, MAX_FAILED_ATTEMPTS, MAX_FAILED_ATTEMPTS_PER_CLIENT } from "@/db/queries/sign-in-attempts";
 import { POST as changePasswordRoute } from "@/app/api/auth/password/route";
 
 afterAll(closeDb);
@@ -40,6 +40,24 @@ describe("authorizePassword", () => {
       .set({ at: new Date(Date.now() - ATTEMPT_WINDOW_MS - 1000) })
       .where(eq(signInAttempts.key, user.email));
     expect(await authorizePassword({ email: user.email, password: user.password })).toMatchObject({ id: user.id });
+  });
+
+  it(`refuses a client after ${MAX_FAILED_ATTEMPTS_PER_CLIENT} failures spread over many addresses (one password tried on many accounts)`, async () => {
+    // 203.0.113.0/24 is TEST-NET-3, reserved for documentation (RFC 5737): no real client has it.
+    const sprayer = `203.0.113.${Math.floor(Math.random() * 250) + 1}-${Date.now()}`;
+    const victim = await createTestUser("sprayed");
+    for (let i = 0; i < MAX_FAILED_ATTEMPTS_PER_CLIENT; i++) {
+      expect(await authorizePassword({ email: uniqueEmail(`spray-${i}`), password: "Summer-2026-season" }, sprayer)).toBeNull();
+    }
+    await expect(authorizePassword({ email: victim.email, password: victim.password }, sprayer)).rejects.toThrow(RATE_LIMITED);
+    expect(await authorizePassword({ email: victim.email, password: victim.password }, "198.51.100.7")).toMatchObject({ id: victim.id });
+  }, 90_000);
+
+  it("reads the client address from X-Forwarded-For as Next.js passes it", () => {
+    expect(clientAddressOf({ "x-forwarded-for": "198.51.100.7, 10.0.0.1" })).toBe("198.51.100.7");
+    expect(clientAddressOf(new Headers({ "x-forwarded-for": "::1" }))).toBe("::1");
+    expect(clientAddressOf({})).toBeNull();
+    expect(clientAddressOf(undefined)).toBeNull();
   });
 
   it("counts failures against addresses that have no account too (no free guessing of who exists)", async () => {
