@@ -32,7 +32,7 @@ export function describeCandidate(c: CandidateRow, units: UnitSystem): string {
 
 export function formatDollars(value: number | null | undefined, digits = 0): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return "—";
-  return `$${formatNumber(value, digits)}`;
+  return `$${value.toLocaleString("en-US", { minimumFractionDigits: digits, maximumFractionDigits: digits })}`;
 }
 
 export function formatCarbon(value: number | null | undefined): string {

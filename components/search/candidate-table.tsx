@@ -109,6 +109,8 @@ export function CandidateTable({ candidates, units, bestId, selected, onToggle }
     },
     onPaginationChange: setPagination,
     getRowId: (r) => r.id,
+    // Every column sorts ascending first (lowest cost, lowest utilization), numbers included.
+    sortDescFirst: false,
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
     getFilteredRowModel: getFilteredRowModel(),

@@ -80,7 +80,11 @@ function SearchesPageInner({ workspaceId, projectId, markId }: SearchesPageProps
             {mark.design.braceLevels > 0 ? ` · ${mark.design.braceLevels} brace level${mark.design.braceLevels > 1 ? "s" : ""}` : ""} ·{" "}
             <Link href={`${base}/check`} className="text-oxide-700 underline">
               see its check
-            </Link>
+            </Link>{" "}
+            ·{" "}
+            <a href={`/api/marks/${markId}/package`} className="text-oxide-700 underline" download>
+              download its calculation package (PDF)
+            </a>
           </p>
         </div>
       </div>
