@@ -103,8 +103,13 @@ export async function runSearchOnPool(request: unknown, options: PoolSearchOptio
     const runOne = async (): Promise<void> => {
       while (next < parts && !options.signal?.aborted) {
         const part = next++;
-        const task: SearchTask = { request: req, part, parts, exhaustive, shared };
-        results.push((await pool.run(task)) as TaskResult);
+        const task: SearchTask = { request: req, part, parts, exhaustive, shared, lockstep: parts === threads };
+        try {
+          results.push((await pool.run(task)) as TaskResult);
+        } catch (e) {
+          cancelShared(shared); // the other parts stop instead of waiting for this one
+          throw e;
+        }
       }
     };
     await Promise.all(Array.from({ length: threads }, () => runOne()));

@@ -19,6 +19,8 @@ export interface SearchTask {
   parts: number;
   exhaustive: boolean;
   shared: SharedBounds;
+  /** parts run at the same time and keep pace with each other by cost (pool searches) */
+  lockstep?: boolean;
 }
 
 /** A passing candidate evaluated in full (what the job stores besides the fronts). */
@@ -55,6 +57,10 @@ export interface TaskResult {
   regions: Record<string, RegionReport>;
 }
 
+/** How far ahead in cost a part may run of the slowest one ($20: about half the spacing of
+ * front points on the default space). */
+const LOCKSTEP_LEAD_CENTS = 2000;
+
 function parse(request: unknown): OptimizeRequest {
   const r = parseOptimizeRequest(request);
   if (!r.ok) throw new TypeError(`invalid optimize request: ${r.error.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
@@ -80,7 +86,11 @@ function dims(problem: SearchProblem, shape: "rect" | "circle"): string {
 /** Runs one task (see SearchTask). */
 export function runSearchTask(task: SearchTask, hooks: { onTick?: () => void; signal?: AbortSignal } = {}): TaskResult {
   const problem = buildSearchProblem(parse(task.request));
-  const exchange = sharedExchange(task.shared, hooks.signal);
+  const exchange = sharedExchange(
+    task.shared,
+    hooks.signal,
+    task.lockstep === true && !task.exhaustive ? { part: task.part, parts: task.parts, lead: LOCKSTEP_LEAD_CENTS } : undefined,
+  );
   const families = enumerateFamilies(problem, { k: task.part, K: task.parts });
   const table = buildCandidateTable(problem, families);
   exchange.announce(table.n);
@@ -94,6 +104,7 @@ export function runSearchTask(task: SearchTask, hooks: { onTick?: () => void; si
       hooks.onTick?.();
     },
   });
+  exchange.finish();
   const cancelled = exchange.cancelled();
   const passing: PassingSummary[] = sweep.passing.map((e) => ({
     id: candidateIdOf(problem, table, e.index),

@@ -270,9 +270,13 @@ function layoutFits(problem: SearchProblem, shape: "rect" | "circle", b: number,
 export function enumerateFamilies(problem: SearchProblem, part: { k: number; K: number } = { k: 0, K: 1 }): Family[] {
   const families: Family[] = [];
   const cover = problem.cover;
-  // Families are dealt round-robin to the K parts of a parallel search, in a fixed order.
+  // Families are dealt to the K parts of a parallel search by a fixed hash of their place in
+  // a fixed order (round-robin would put every square outline in the same part).
   let spec = -1;
-  const mine = () => ++spec % part.K === part.k;
+  const mine = () => {
+    spec++;
+    return part.K === 1 || ((Math.imul(spec + 1, 0x9e3779b1) >>> 0) % part.K) === part.k;
+  };
   for (const fy of problem.fys) {
     for (const size of problem.sizes) {
       const bar = barProperties(size);

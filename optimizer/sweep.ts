@@ -42,6 +42,8 @@ export interface BoundExchange {
   push(cents: number, utilUnits: number, carbonUnits: number): void;
   /** true once the search is cancelled */
   cancelled(): boolean;
+  /** the sweep has reached this cost (cents); may wait for slower parts */
+  at?(cents: number): void;
 }
 
 export interface EvaluatedCandidate {
@@ -118,11 +120,12 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
   const iseCache = new Map<number, [number, number]>();
   const members = problem.braceLevels.map((n): MemberInput => ({ ...problem.member, braceLevels: n }));
   for (let pos = opts.from; pos < opts.to; pos++) {
+    const i = table.order[pos] as number;
     if ((pos - opts.from) % 64 === 0) {
       if (opts.exchange.cancelled()) break;
+      opts.exchange.at?.(table.cents[i] as number);
       opts.exchange.pull(util, carb);
     }
-    const i = table.order[pos] as number;
     visited++;
     if (opts.onTick && ++sinceTick >= 256) {
       opts.onTick(sinceTick, passing.length);
