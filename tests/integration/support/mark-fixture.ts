@@ -4,6 +4,7 @@
  * checked against them.
  */
 import { getDb } from "@/db/client";
+import type { BarSize } from "@/engine/types";
 import { columnMarks, loadCombinations, priceBooks, projects } from "@/db/schema";
 import { createTestWorkspace, type TestWorkspace } from "./fixtures";
 
@@ -70,6 +71,6 @@ export const SMALL_SPACE = {
   b: [14, 22, 2] as [number, number, number],
   h: [14, 22, 2] as [number, number, number],
   fc: [5, 6],
-  sizes: ["#8", "#9"],
+  sizes: ["#8", "#9"] as BarSize[],
   braceLevels: [0, 1],
 };
