@@ -9,7 +9,7 @@ export const dynamic = "force-dynamic";
 
 /** Status and live progress of one search (polled by the client). */
 export const GET = handler({}, async ({ user, params }) => {
-  const { search } = await authorizeSearch(user, params.id ?? "", "read");
+  const { search } = await authorizeSearch(user, params.searchId ?? "", "read");
   const inputs = await readMarkInputs(search.markId);
   return { search: toSearchView(search, inputs ? fingerprintMark(inputs) : null) };
 });

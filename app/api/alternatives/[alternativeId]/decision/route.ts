@@ -16,7 +16,7 @@ export const dynamic = "force-dynamic";
 
 /** Engineers (and owners) approve or reject a proposal; approving sets the mark's design. */
 export const POST = handler({ body: decideAlternativeSchema }, async ({ user, params, body }) => {
-  const access = await authorizeAlternative(user, params.id ?? "", "approveAlternative");
+  const access = await authorizeAlternative(user, params.alternativeId ?? "", "approveAlternative");
   const inputs = await readMarkInputs(access.markId);
   if (!inputs) throw notFound("column mark not found");
   const design = designFromCandidateId(access.alternative.candidateId, inputs.project.cover);

@@ -19,7 +19,7 @@ export const dynamic = "force-dynamic";
  * stays stale and the check says why.
  */
 export const POST = handler({}, async ({ user, params }) => {
-  const access = await authorizeAlternative(user, params.id ?? "", "runSearch");
+  const access = await authorizeAlternative(user, params.alternativeId ?? "", "runSearch");
   const inputs = await readMarkInputs(access.markId);
   if (!inputs) throw notFound("column mark not found");
   const design = designFromCandidateId(access.alternative.candidateId, inputs.project.cover);

@@ -15,7 +15,7 @@ export const runtime = "nodejs";
 export const dynamic = "force-dynamic";
 
 export const GET = handler({}, async ({ user, params }) => {
-  const access = await authorizeMark(user, params.id ?? "", "read");
+  const access = await authorizeMark(user, params.markId ?? "", "read");
   const inputs = await readMarkInputs(access.markId);
   if (!inputs) throw notFound("column mark not found");
   const current = fingerprintMark(inputs);
@@ -25,7 +25,7 @@ export const GET = handler({}, async ({ user, params }) => {
 
 /** Proposes a candidate of one of this mark's finished searches. */
 export const POST = handler({ body: proposeAlternativeSchema }, async ({ user, params, body }) => {
-  const access = await authorizeMark(user, params.id ?? "", "proposeAlternative");
+  const access = await authorizeMark(user, params.markId ?? "", "proposeAlternative");
   const search = await findSearch(body.searchId);
   if (!search || search.markId !== access.markId) throw notFound("search not found");
   const candidate = await findCandidate(search.id, body.candidateId);

@@ -14,7 +14,7 @@ export const dynamic = "force-dynamic";
 
 /** Searches of a mark, newest first. */
 export const GET = handler({}, async ({ user, params }) => {
-  const access = await authorizeMark(user, params.id ?? "", "read");
+  const access = await authorizeMark(user, params.markId ?? "", "read");
   const inputs = await readMarkInputs(access.markId);
   if (!inputs) throw notFound("column mark not found");
   const current = fingerprintMark(inputs);
@@ -24,7 +24,7 @@ export const GET = handler({}, async ({ user, params }) => {
 
 /** Stores the request (space, price book, loads) and queues it for a worker. */
 export const POST = handler({ body: startSearchSchema }, async ({ user, params, body }) => {
-  const access = await authorizeMark(user, params.id ?? "", "runSearch");
+  const access = await authorizeMark(user, params.markId ?? "", "runSearch");
   const inputs = await readMarkInputs(access.markId);
   if (!inputs) throw notFound("column mark not found");
   const request = buildSearchRequest(inputs, body);

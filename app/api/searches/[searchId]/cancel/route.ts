@@ -11,7 +11,7 @@ export const dynamic = "force-dynamic";
 
 /** Cancels a queued or running search; the worker sees it within a fraction of a second. */
 export const POST = handler({}, async ({ user, params }) => {
-  const access = await authorizeSearch(user, params.id ?? "", "runSearch");
+  const access = await authorizeSearch(user, params.searchId ?? "", "runSearch");
   const cancelled = await cancelSearch(access.search.id);
   if (!cancelled) throw conflict(`the search is already ${access.search.status}`, toSearchView(access.search, null));
   if (access.search.jobId) await cancelSearchJob(access.search.jobId).catch(() => undefined);

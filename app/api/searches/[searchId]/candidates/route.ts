@@ -10,7 +10,7 @@ const querySchema = z.object({ front: z.enum(["0", "1"]).optional() }).strict();
 
 /** The stored passing candidates of a finished search (front members flagged), cheapest first. */
 export const GET = handler({ query: querySchema }, async ({ user, params, query }) => {
-  const { search } = await authorizeSearch(user, params.id ?? "", "read");
+  const { search } = await authorizeSearch(user, params.searchId ?? "", "read");
   const rows = await listCandidates(search.id, { frontOnly: query.front === "1" });
   return {
     status: search.status,
