@@ -39,7 +39,7 @@ import type {
 } from "../engine/types";
 import { defaultSpaceFor, type OptimizeRequest } from "../lib/validation/optimize-request";
 import { formatCandidateId } from "./candidate-id";
-import { toCarbonUnits, toCents } from "./pareto-front";
+import { toCarbonUnits, toCents, toUtilUnits } from "./pareto-front";
 
 /** A value in engine units with the number the user wrote (ids and output use the latter). */
 export interface Valued {
@@ -500,6 +500,17 @@ export interface CandidateTable {
   carbonUnits: Float64Array;
   /** candidates sorted by cents, then index */
   order: Uint32Array;
+  /**
+   * What the sweep reads for every candidate, in visiting order (4 numbers per position, one
+   * cache line instead of six arrays read at random): cents, carbon units, the axial lower
+   * bound of the utilization in 1e-4 units (Infinity when some Pu exceeds φPn,max), region.
+   */
+  visit: Float64Array;
+}
+
+/** Region index of a family in `visit` (0 rect, 1 tied circle, 2 spiral circle). */
+export function regionIndexOf(fam: Family): number {
+  return fam.shape === "rect" ? 0 : fam.confinement === "spiral" ? 2 : 1;
 }
 
 export function buildCandidateTable(problem: SearchProblem, families: Family[] = enumerateFamilies(problem)): CandidateTable {
@@ -520,7 +531,10 @@ export function buildCandidateTable(problem: SearchProblem, families: Family[] =
     carbon: new Float64Array(n),
     carbonUnits: new Float64Array(n),
     order: new Uint32Array(n),
+    visit: new Float64Array(4 * n),
   };
+  const lb = new Float64Array(n);
+  const maxPu = problem.loads.reduce((m, l) => Math.max(m, l.Pu), -Infinity);
   let k = 0;
   const braceAdd = problem.braceLevels.map((n) => n * problem.prices.brace);
   for (const fam of families) {
@@ -532,6 +546,9 @@ export function buildCandidateTable(problem: SearchProblem, families: Family[] =
         // quantities depend on f'c only through the lap (25.5.5.1) and the spiral pitch
         if (q === null || fam.confinement === "spiral" || laps[fi] !== laps[fi - 1]) q = quantitiesOf(problem, fam, li, fi);
         const carbon = carbonOf(problem, q, fi);
+        // the engine fails a case with Pu > φPn,max first; a case's utilization is ≥ Pu/φPn,max
+        const phiPnMax = phiPnMaxOf(fam, li, (problem.fcs[fi] as Valued).v);
+        const lbUnits = maxPu <= phiPnMax ? toUtilUnits(maxPu / phiPnMax) : Number.POSITIVE_INFINITY;
         // computeCost adds the brace line last, so the total with n braces is total₀ + n·price
         const base = costOf(problem, q, fi, 0);
         for (let bi = 0; bi < problem.braceLevels.length; bi++) {
@@ -545,6 +562,7 @@ export function buildCandidateTable(problem: SearchProblem, families: Family[] =
           t.cents[k] = toCents(cost);
           t.carbon[k] = carbon;
           t.carbonUnits[k] = toCarbonUnits(carbon);
+          lb[k] = lbUnits;
           k++;
         }
       }
@@ -561,6 +579,13 @@ export function buildCandidateTable(problem: SearchProblem, families: Family[] =
     const idx = Array.from({ length: n }, (_, i) => i);
     idx.sort((a, b) => (t.cents[a] as number) - (t.cents[b] as number) || a - b);
     t.order.set(idx);
+  }
+  for (let pos = 0; pos < n; pos++) {
+    const i = t.order[pos] as number;
+    t.visit[4 * pos] = t.cents[i] as number;
+    t.visit[4 * pos + 1] = t.carbonUnits[i] as number;
+    t.visit[4 * pos + 2] = lb[i] as number;
+    t.visit[4 * pos + 3] = regionIndexOf(families[t.family[i] as number] as Family);
   }
   return t;
 }

@@ -29,7 +29,7 @@ import { caseUtilization, prepareMember, resolveSection } from "../engine";
 import type { LoadCase, MemberInput } from "../engine/types";
 import { Staircase, toUtilUnits } from "./pareto-front";
 import { proveUnstable, steelInertiaOf } from "./prove-unstable";
-import { phiPnMaxOf, sectionInputOf, type CandidateTable, type Family, type SearchProblem } from "./search-space";
+import { sectionInputOf, type CandidateTable, type Family, type SearchProblem } from "./search-space";
 
 /** Pass tolerance of the engine's check (utilization ≤ 1 + 1e-9 passes). */
 const PASS_LIMIT = 1 + 1e-9;
@@ -115,15 +115,18 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
   let caseChecks = 0;
   let visited = 0;
   let sinceTick = 0;
-  const maxPu = loads.reduce((m, l) => Math.max(m, l.Pu), -Infinity);
   const famTally: RegionTally[] = table.families.map((fam) => (regions[regionOf(fam)] ??= newTally(nCases)));
   const iseCache = new Map<number, [number, number]>();
   const members = problem.braceLevels.map((n): MemberInput => ({ ...problem.member, braceLevels: n }));
+  const regionKeys = ["rect", "circle", "circle-spiral"];
+  const regionTally = regionKeys.map((k) => (regions[k] ??= newTally(nCases)));
+  const visit = table.visit;
+  const exhaustive = opts.exhaustive === true;
   for (let pos = opts.from; pos < opts.to; pos++) {
-    const i = table.order[pos] as number;
+    const cents = visit[4 * pos] as number;
     if ((pos - opts.from) % 64 === 0) {
       if (opts.exchange.cancelled()) break;
-      opts.exchange.at?.(table.cents[i] as number);
+      opts.exchange.at?.(cents);
       opts.exchange.pull(util, carb);
     }
     visited++;
@@ -131,26 +134,27 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
       opts.onTick(sinceTick, passing.length);
       sinceTick = 0;
     }
+    const cu = visit[4 * pos + 1] as number;
+    const lbUnits = visit[4 * pos + 2] as number;
+    if (!exhaustive) {
+      // Table 22.4.2.1: the engine fails a case whose Pu exceeds φPn,max before anything else
+      if (lbUnits === Number.POSITIVE_INFINITY) {
+        (regionTally[visit[4 * pos + 3] as number] as RegionTally).axialFails++;
+        continue;
+      }
+      if (carb.dominatesAll(cents, cu) && util.dominatesAll(cents, lbUnits)) {
+        (regionTally[visit[4 * pos + 3] as number] as RegionTally).dominated++;
+        continue;
+      }
+    }
+    const i = table.order[pos] as number;
     const famIndex = table.family[i] as number;
     const fam = table.families[famIndex] as Family;
     const tally = famTally[famIndex] as RegionTally;
     const li = table.layout[i] as number;
     const fi = table.fc[i] as number;
     const fc = (problem.fcs[fi] as { v: number }).v;
-    const cents = table.cents[i] as number;
-    const cu = table.carbonUnits[i] as number;
-    const exhaustive = opts.exhaustive === true;
-    // Table 22.4.2.1: the engine fails a case whose Pu exceeds φPn,max before anything else
-    const phiPnMax = phiPnMaxOf(fam, li, fc);
-    if (!exhaustive && !(maxPu <= phiPnMax)) {
-      tally.axialFails++;
-      continue;
-    }
     const carbonDominated = !exhaustive && carb.dominatesAll(cents, cu);
-    if (carbonDominated && util.dominatesAll(cents, toUtilUnits(maxPu / phiPnMax))) {
-      tally.dominated++;
-      continue;
-    }
     if (!exhaustive) {
       const key = famIndex * 65536 + li;
       let ise = iseCache.get(key);
