@@ -106,6 +106,9 @@ function ScheduleInner({ workspaceId, projectId }: ScheduleViewProps) {
                     <Link href={`${markBase}/${r.markId}`} className="text-oxide-700 underline">
                       {r.label}
                     </Link>
+                    <a href={`/api/marks/${r.markId}/package`} className="block text-xs font-normal text-oxide-700 underline" download aria-label={`Calculation package of ${r.label} (PDF)`}>
+                      PDF
+                    </a>
                   </th>
                   <td className="py-1 pr-3">{r.level || "—"}</td>
                   <td className="py-1 pr-3 tabular-nums">{r.quantity}</td>
@@ -204,9 +207,6 @@ function ScheduleInner({ workspaceId, projectId }: ScheduleViewProps) {
           </section>
         </div>
       ) : null}
-      <p className="text-xs text-ink-700" data-testid="caution">
-        {s.caution}
-      </p>
     </div>
   );
 }

@@ -76,9 +76,16 @@ function SearchResultsInner({ workspaceId, projectId, markId, searchId }: Search
     else url.searchParams.delete("compare");
     window.history.replaceState(window.history.state, "", url.toString());
   }, [selected]);
-  const toggle = useCallback((id: string) => {
-    setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : s.length >= MAX_COMPARED ? s : [...s, id]));
-  }, []);
+  const loaded = candidates.data?.candidates;
+  const toggle = useCallback(
+    (id: string) => {
+      setSelected((all) => {
+        const s = loaded ? all.filter((x) => loaded.some((c) => c.id === x)) : all;
+        return s.includes(id) ? s.filter((x) => x !== id) : s.length >= MAX_COMPARED ? s : [...s, id];
+      });
+    },
+    [loaded],
+  );
 
   if (markQuery.isPending || project.isPending || search.isPending) return <p className="text-ink-500">Loading the search…</p>;
   if (markQuery.isError) return <p role="alert">The mark could not be loaded: {markQuery.error.message}</p>;
@@ -94,6 +101,8 @@ function SearchResultsInner({ workspaceId, projectId, markId, searchId }: Search
   const bestId = stats.best ?? rows[0]?.id ?? null;
   const best = rows.find((r) => r.id === bestId) ?? null;
   const compared = selected.map((id) => rows.find((r) => r.id === id)).filter((r): r is CandidateRow => r !== undefined);
+  // Ids from an old address that are not in this search's results do not count against the four.
+  const comparedIds = compared.map((c) => c.id);
   const cur = current.data;
   const a = stats.assumptions ?? {};
 
@@ -204,14 +213,14 @@ function SearchResultsInner({ workspaceId, projectId, markId, searchId }: Search
               bestId={bestId}
               carbonFront={stats.carbonFront ?? []}
               current={cur ? { label: mark.label, cost: cur.cost?.total ?? null, carbon: cur.carbon?.total ?? null, utilization: cur.utilization, pass: cur.pass } : null}
-              selected={selected}
+              selected={comparedIds}
               onToggle={toggle}
             />
           </section>
 
           <section aria-label="Candidates" className="panel">
             <h2 className="mb-2 font-semibold">Passing candidates</h2>
-            <CandidateTable candidates={rows} units={units} bestId={bestId} selected={selected} onToggle={toggle} />
+            <CandidateTable candidates={rows} units={units} bestId={bestId} selected={comparedIds} onToggle={toggle} />
           </section>
 
           <section aria-label="Comparison" className="panel">

@@ -133,7 +133,7 @@ function RangeFields({ name, value, onChange, units, error }: { name: string; va
   };
   return (
     <fieldset>
-      <legend className="field-label">{name}</legend>
+      <legend className="sr-only">{name} range</legend>
       <div className="grid grid-cols-3 gap-2">
         <NumberField label={`${name} from`} value={value[0]} onChange={set(0)} quantity="length" units={units} min={0} />
         <NumberField label={`${name} to`} value={value[1]} onChange={set(1)} quantity="length" units={units} min={0} />
