@@ -4,14 +4,21 @@
  * limit of 6.2.5.1 and δ = 1) yet fail once the moment magnifier is included; the others pass.
  * The data is ours and invented; this guards the demo against engine or data changes.
  */
-import { describe, expect, it } from "vitest";
-import { callRoute } from "../integration/support/session";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { closeDb } from "./support/database";
+import { createTestUser, type TestUser } from "./support/fixtures";
+import { callRoute } from "./support/session";
 import * as checkRoute from "@/app/api/check/route";
 import { DEMO_MARKS, DEMO_PRICE_BOOK, DEMO_PROJECT } from "@/scripts/demo-building-data";
 import { applyPsi, composeCheckInput, markCreateSchema } from "@/lib/validation/mark";
 import type { CheckOutput } from "@/engine/types";
 
-const user = { id: "00000000-0000-4000-8000-000000000002", email: "demo@firm.test", name: "Demo" };
+// A real user: the session helper also checks that the signed-in person still exists.
+let user: TestUser;
+beforeAll(async () => {
+  user = await createTestUser("demo");
+});
+afterAll(closeDb);
 
 async function check(input: unknown): Promise<CheckOutput> {
   const res = await callRoute<CheckOutput>(checkRoute.POST, "/api/check", { method: "POST", user, body: input });

@@ -1,18 +1,26 @@
 /**
- * POST /api/check and POST /api/diagram answer exactly what the CLI prints for the same JSON
+ * POST /api/check and POST /api/diagram (signed-in users; the session is checked against the
+ * database, hence this lives with the integration tests) answer exactly what the CLI prints for the same JSON
  * (cli-contract.md): the route handler is run in-process, the CLI as a separate process
  * (`tsx scripts/cli.ts check -`), and their outputs compared byte for byte, with the exit code
  * carried in a header. Invalid input gives the contract's error body (400 ≙ exit 2).
  */
-import { describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { closeDb } from "./support/database";
+import { createTestUser, type TestUser } from "./support/fixtures";
 import { spawnSync } from "node:child_process";
 import path from "node:path";
-import { buildRequest, callRoute } from "../integration/support/session";
+import { buildRequest, callRoute } from "./support/session";
 import * as checkRoute from "@/app/api/check/route";
 import * as diagramRoute from "@/app/api/diagram/route";
 
 const ROOT = path.resolve(import.meta.dirname, "../..");
-const user = { id: "00000000-0000-4000-8000-000000000001", email: "checker@firm.test", name: "Checker" };
+// A real user: the session helper also checks that the signed-in person still exists.
+let user: TestUser;
+beforeAll(async () => {
+  user = await createTestUser("checker");
+});
+afterAll(closeDb);
 
 function runCli(command: string, input: unknown): { stdout: string; stderr: string; status: number | null } {
   const r = spawnSync(process.execPath, [path.join(ROOT, "node_modules/tsx/dist/cli.mjs"), path.join(ROOT, "scripts/cli.ts"), command, "-"], {
