@@ -2,7 +2,7 @@ import next from "eslint-config-next";
 import nextTypescript from "eslint-config-next/typescript";
 
 const config = [
-  { ignores: [".next/**", "node_modules/**", ".data/**", "drizzle/**", "dist/**", "test-results/**", "playwright-report/**", "next-env.d.ts"] },
+  { ignores: [".next/**", ".next*/**", "node_modules/**", ".data/**", "drizzle/**", "dist/**", "test-results/**", "playwright-report/**", "next-env.d.ts"] },
   ...next,
   ...nextTypescript,
   {

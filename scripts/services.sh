@@ -105,7 +105,9 @@ wait_for_port() { # $1 port, $2 seconds
 start_background() { # $1 name, rest = command; output to .data/logs/NAME.log
   local name="$1"; shift
   mkdir -p "$ROOT/.data/logs"
-  (cd "$ROOT" && exec "$@") >"$ROOT/.data/logs/$name.log" 2>&1 &
+  # A process group of its own (setsid), so stopping it also stops what it started (npx → node →
+  # next-server, tsx → node): a server left behind would serve an old build to the next run.
+  (cd "$ROOT" && exec setsid "$@") >"$ROOT/.data/logs/$name.log" 2>&1 &
   STARTED_PIDS+=("$!")
 }
 
@@ -121,11 +123,15 @@ start_mail_catcher() {
 }
 
 stop_background() {
-  local pid
+  local pid i
   for pid in "${STARTED_PIDS[@]:-}"; do
     [ -n "$pid" ] || continue
-    kill "$pid" 2>/dev/null || true
-    pkill -P "$pid" 2>/dev/null || true
+    kill -TERM -- "-$pid" 2>/dev/null || kill -TERM "$pid" 2>/dev/null || true
+  done
+  for pid in "${STARTED_PIDS[@]:-}"; do
+    [ -n "$pid" ] || continue
+    for ((i = 0; i < 50; i++)); do kill -0 -- "-$pid" 2>/dev/null || break; sleep 0.1; done
+    kill -KILL -- "-$pid" 2>/dev/null || true
   done
   wait 2>/dev/null || true
   STARTED_PIDS=()

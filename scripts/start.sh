@@ -26,6 +26,6 @@ log "building the app"
 npm run --silent build
 log "serving on http://127.0.0.1:$APP_PORT"
 npx tsx scripts/print-demo-sign-in.ts || true
-npx next start -H 127.0.0.1 -p "$APP_PORT" &
-STARTED_PIDS+=("$!")
-wait "$!"
+start_background app npx next start -H 127.0.0.1 -p "$APP_PORT"
+wait_for_port "$APP_PORT" 60 && log "ready: http://127.0.0.1:$APP_PORT (logs in .data/logs/)"
+wait "${STARTED_PIDS[@]}"
