@@ -8,8 +8,17 @@ import type { CheckOutput } from "../engine/types";
 import { parseOptimizeRequest, type OptimizeRequest } from "../lib/validation/optimize-request";
 import { buildFrontEntry, checkCandidate, type FrontEntry } from "./front-entry";
 import { selectFront, toUtilUnits } from "./pareto-front";
-import { buildCandidateTable, buildSearchProblem, candidateIdOf, enumerateFamilies, phiPnMaxOf, type SearchProblem } from "./search-space";
-import { regionOf, sweepSlice, type RegionTally } from "./sweep";
+import {
+  buildCandidateTable,
+  buildSearchProblem,
+  candidateIdOf,
+  enumerateFamilies,
+  phiPnMaxOf,
+  type CandidateTable,
+  type Family,
+  type SearchProblem,
+} from "./search-space";
+import { regionOf, sweepSlice, type RegionTally, type SweepResult } from "./sweep";
 import { sharedExchange, type SharedBounds } from "./shared-bounds";
 
 export interface SearchTask {
@@ -91,20 +100,28 @@ export function runSearchTask(task: SearchTask, hooks: { onTick?: () => void; si
     hooks.signal,
     task.lockstep === true && !task.exhaustive ? { part: task.part, parts: task.parts, lead: LOCKSTEP_LEAD_CENTS } : undefined,
   );
-  const families = enumerateFamilies(problem, { k: task.part, K: task.parts });
-  const table = buildCandidateTable(problem, families);
-  exchange.announce(table.n);
-  const sweep = sweepSlice(problem, table, {
-    from: 0,
-    to: table.n,
-    exchange,
-    exhaustive: task.exhaustive,
-    onTick: (v) => {
-      exchange.tick(v);
-      hooks.onTick?.();
-    },
-  });
-  exchange.finish();
+  exchange.begin();
+  let families: Family[];
+  let table: CandidateTable;
+  let sweep: SweepResult;
+  try {
+    families = enumerateFamilies(problem, { k: task.part, K: task.parts });
+    table = buildCandidateTable(problem, families);
+    exchange.announce(table.n);
+    sweep = sweepSlice(problem, table, {
+      from: 0,
+      to: table.n,
+      exchange,
+      exhaustive: task.exhaustive,
+      onTick: (v) => {
+        exchange.tick(v);
+        hooks.onTick?.();
+      },
+    });
+  } finally {
+    // the other parts stop waiting for this one, whatever happened
+    exchange.finish();
+  }
   const cancelled = exchange.cancelled();
   const passing: PassingSummary[] = sweep.passing.map((e) => ({
     id: candidateIdOf(problem, table, e.index),

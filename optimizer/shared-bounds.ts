@@ -61,7 +61,7 @@ export function sharedExchange(
   b: SharedBounds,
   signal?: AbortSignal,
   lockstep?: Lockstep,
-): BoundExchange & { tick(visited: number): void; announce(candidates: number): void; at(cents: number): void; finish(): void } {
+): BoundExchange & { tick(visited: number): void; announce(candidates: number): void; at(cents: number): void; begin(): void; finish(): void } {
   const { ctl, ready, pts, pos } = views(b.buffer);
   let seen = 0;
   const cancelled = () => Atomics.load(ctl, 0) === 1 || signal?.aborted === true;
@@ -80,6 +80,10 @@ export function sharedExchange(
         if (slowest === FINISHED || me <= slowest + lockstep.lead || cancelled()) return;
         Atomics.wait(pos, lockstep.part, me, 0.2); // a short nap; nobody needs to wake us
       }
+    },
+    /** marks this part as running from cost 0, so the others wait for its first candidates */
+    begin() {
+      if (lockstep !== undefined && lockstep.part < MAX_PARTS) Atomics.store(pos, lockstep.part, 1);
     },
     finish() {
       if (lockstep !== undefined && lockstep.part < MAX_PARTS) Atomics.store(pos, lockstep.part, FINISHED);
