@@ -18,6 +18,7 @@ import { InteractionChart, type LoadPoint } from "@/components/interaction-chart
 import { MagnifierChain } from "@/components/magnifier-chain";
 import { DetailingTable } from "@/components/detailing-table";
 import { CAUTION } from "@/lib/caution";
+import { KG_PER_LB, M2_PER_FT2, M3_PER_YD3 } from "@/engine/units";
 import type { CheckInputResponse } from "./mark-types";
 
 export interface CheckViewProps {
@@ -311,11 +312,14 @@ function CheckViewInner({ workspaceId, projectId, markId }: CheckViewProps) {
       <section aria-label="Quantities and cost" className="panel break-inside-avoid text-sm">
         <h2 className="font-semibold">Quantities and cost (one column)</h2>
         <p className="mt-1">
-          Concrete {formatNumber(out.quantities.concreteYd3, 2)} yd³ · steel {formatNumber(out.quantities.steelLb, 0)} lb · forms {formatNumber(out.quantities.formFt2, 1)} ft² · {out.quantities.ties} ties
+          {units === "SI"
+            ? `Concrete ${formatNumber(out.quantities.concreteYd3 * M3_PER_YD3, 2)} m³ · steel ${formatNumber(out.quantities.steelLb * KG_PER_LB, 0)} kg · forms ${formatNumber(out.quantities.formFt2 * M2_PER_FT2, 1)} m²`
+            : `Concrete ${formatNumber(out.quantities.concreteYd3, 2)} yd³ · steel ${formatNumber(out.quantities.steelLb, 0)} lb · forms ${formatNumber(out.quantities.formFt2, 1)} ft²`}{" "}
+          · {out.quantities.ties} ties
           {out.quantities.crossTies ? `, ${out.quantities.crossTies} cross-ties` : ""}
         </p>
         {out.cost ? (
-          <table className="mt-2 w-full text-sm">
+          <table className="mt-2 w-full text-sm" aria-label={`Cost at the price book's units (price book revision ${priceBook?.revision ?? "—"})`}>
             <tbody>
               {out.cost.lines.map((l) => (
                 <tr key={`${l.category}-${l.item}`} className="border-b border-stone-100">
