@@ -65,12 +65,11 @@ npx vitest run ${TEST_VITEST:-} --reporter=default --reporter=json --outputFile.
 count_json "$REPORTS/vitest.json" vitest
 
 step "build" npm run --silent build
-if [ -d "$NEXT_DIST_DIR" ]; then
+if [ -d "$NEXT_DIST_DIR" ] && wait_for_port "$APP_PORT" 0; then
+  log "port $APP_PORT is already taken by another process: refusing to test someone else's server"
+  FAILED=$((FAILED + 1))
+elif [ -d "$NEXT_DIST_DIR" ]; then
   start_background worker-test npx tsx scripts/worker.ts
-  if wait_for_port "$APP_PORT" 0; then
-    log "port $APP_PORT is already taken by another process: refusing to test someone else's server"
-    FAILED=$((FAILED + 1))
-  fi
   start_background app-test npx next start -H 127.0.0.1 -p "$APP_PORT"
   if wait_for_port "$APP_PORT" 60; then
     log "playwright (Chromium at /usr/bin/chromium)"
