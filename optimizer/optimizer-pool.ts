@@ -103,7 +103,7 @@ export async function runSearchOnPool(request: unknown, options: PoolSearchOptio
     const runOne = async (): Promise<void> => {
       while (next < parts && !options.signal?.aborted) {
         const part = next++;
-        const task: SearchTask = { request: req, part, parts, exhaustive, shared, lockstep: parts === threads };
+        const task: SearchTask = { request: req, part, parts, exhaustive, shared };
         try {
           results.push((await pool.run(task)) as TaskResult);
         } catch (e) {

@@ -28,8 +28,6 @@ export interface SearchTask {
   parts: number;
   exhaustive: boolean;
   shared: SharedBounds;
-  /** parts run at the same time and keep pace with each other by cost (pool searches) */
-  lockstep?: boolean;
 }
 
 /** A passing candidate evaluated in full (what the job stores besides the fronts). */
@@ -64,11 +62,9 @@ export interface TaskResult {
   outputChecks: number;
   visited: number;
   regions: Record<string, RegionReport>;
+  /** where the task's time went, ms (diagnostics for benchmarks) */
+  timings: { setup: number; table: number; sweep: number; finish: number };
 }
-
-/** How far ahead in cost a part may run of the slowest one ($20: about half the spacing of
- * front points on the default space). */
-const LOCKSTEP_LEAD_CENTS = 2000;
 
 function parse(request: unknown): OptimizeRequest {
   const r = parseOptimizeRequest(request);
@@ -94,34 +90,25 @@ function dims(problem: SearchProblem, shape: "rect" | "circle"): string {
 
 /** Runs one task (see SearchTask). */
 export function runSearchTask(task: SearchTask, hooks: { onTick?: () => void; signal?: AbortSignal } = {}): TaskResult {
+  const t0 = performance.now();
   const problem = buildSearchProblem(parse(task.request));
-  const exchange = sharedExchange(
-    task.shared,
-    hooks.signal,
-    task.lockstep === true && !task.exhaustive ? { part: task.part, parts: task.parts, lead: LOCKSTEP_LEAD_CENTS } : undefined,
-  );
-  exchange.begin();
-  let families: Family[];
-  let table: CandidateTable;
-  let sweep: SweepResult;
-  try {
-    families = enumerateFamilies(problem, { k: task.part, K: task.parts });
-    table = buildCandidateTable(problem, families);
-    exchange.announce(table.n);
-    sweep = sweepSlice(problem, table, {
-      from: 0,
-      to: table.n,
-      exchange,
-      exhaustive: task.exhaustive,
-      onTick: (v) => {
-        exchange.tick(v);
-        hooks.onTick?.();
-      },
-    });
-  } finally {
-    // the other parts stop waiting for this one, whatever happened
-    exchange.finish();
-  }
+  const exchange = sharedExchange(task.shared, hooks.signal);
+  const families: Family[] = enumerateFamilies(problem, { k: task.part, K: task.parts });
+  const t1 = performance.now();
+  const table: CandidateTable = buildCandidateTable(problem, families, { reuseBuffers: true });
+  exchange.announce(table.n);
+  const t2 = performance.now();
+  const sweep: SweepResult = sweepSlice(problem, table, {
+    from: 0,
+    to: table.n,
+    exchange,
+    exhaustive: task.exhaustive,
+    onTick: (v) => {
+      exchange.tick(v);
+      hooks.onTick?.();
+    },
+  });
+  const t3 = performance.now();
   const cancelled = exchange.cancelled();
   const passing: PassingSummary[] = sweep.passing.map((e) => ({
     id: candidateIdOf(problem, table, e.index),
@@ -189,6 +176,7 @@ export function runSearchTask(task: SearchTask, hooks: { onTick?: () => void; si
     outputChecks,
     visited: sweep.visited,
     regions,
+    timings: { setup: t1 - t0, table: t2 - t1, sweep: t3 - t2, finish: performance.now() - t3 },
   };
 }
 

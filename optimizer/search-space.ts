@@ -513,7 +513,33 @@ export function regionIndexOf(fam: Family): number {
   return fam.shape === "rect" ? 0 : fam.confinement === "spiral" ? 2 : 1;
 }
 
-export function buildCandidateTable(problem: SearchProblem, families: Family[] = enumerateFamilies(problem)): CandidateTable {
+/**
+ * Typed arrays kept between the tasks a worker thread runs: allocating tens of MB afresh for
+ * every search costs more in page faults than filling them, and those faults do not run in
+ * parallel on two threads. Only used when the caller owns the table until its next call.
+ */
+const reusable = new Map<string, Float64Array | Uint32Array | Uint16Array | Uint8Array>();
+function arrayOf<T extends Float64Array | Uint32Array | Uint16Array | Uint8Array>(
+  name: string,
+  n: number,
+  make: (n: number) => T,
+  reuse: boolean,
+): T {
+  if (!reuse) return make(n);
+  let a = reusable.get(name) as T | undefined;
+  if (a === undefined || a.length < n) {
+    a = make(Math.ceil(n * 1.25));
+    reusable.set(name, a);
+  }
+  return a.subarray(0, n) as T;
+}
+
+export function buildCandidateTable(
+  problem: SearchProblem,
+  families: Family[] = enumerateFamilies(problem),
+  options: { reuseBuffers?: boolean } = {},
+): CandidateTable {
+  const reuse = options.reuseBuffers === true;
   let n = 0;
   for (const fam of families) {
     const fcOk = fam.confinementOk.filter(Boolean).length;
@@ -522,18 +548,18 @@ export function buildCandidateTable(problem: SearchProblem, families: Family[] =
   const t: CandidateTable = {
     families,
     n,
-    family: new Uint32Array(n),
-    layout: new Uint16Array(n),
-    fc: new Uint8Array(n),
-    brace: new Uint8Array(n),
-    cost: new Float64Array(n),
-    cents: new Float64Array(n),
-    carbon: new Float64Array(n),
-    carbonUnits: new Float64Array(n),
-    order: new Uint32Array(n),
-    visit: new Float64Array(4 * n),
+    family: arrayOf("family", n, (m) => new Uint32Array(m), reuse),
+    layout: arrayOf("layout", n, (m) => new Uint16Array(m), reuse),
+    fc: arrayOf("fc", n, (m) => new Uint8Array(m), reuse),
+    brace: arrayOf("brace", n, (m) => new Uint8Array(m), reuse),
+    cost: arrayOf("cost", n, (m) => new Float64Array(m), reuse),
+    cents: arrayOf("cents", n, (m) => new Float64Array(m), reuse),
+    carbon: arrayOf("carbon", n, (m) => new Float64Array(m), reuse),
+    carbonUnits: arrayOf("carbonUnits", n, (m) => new Float64Array(m), reuse),
+    order: arrayOf("order", n, (m) => new Uint32Array(m), reuse),
+    visit: arrayOf("visit", 4 * n, (m) => new Float64Array(m), reuse),
   };
-  const lb = new Float64Array(n);
+  const lb = arrayOf("lb", n, (m) => new Float64Array(m), reuse);
   const maxPu = problem.loads.reduce((m, l) => Math.max(m, l.Pu), -Infinity);
   let k = 0;
   const braceAdd = problem.braceLevels.map((n) => n * problem.prices.brace);
@@ -571,7 +597,7 @@ export function buildCandidateTable(problem: SearchProblem, families: Family[] =
   // Visit order: by cents (ties by index, which is deterministic). A packed numeric sort is
   // ~10× faster than a comparator sort on hundreds of thousands of candidates.
   if (n < 2 ** 20) {
-    const keys = new Float64Array(n);
+    const keys = arrayOf("keys", n, (m) => new Float64Array(m), reuse);
     for (let i = 0; i < n; i++) keys[i] = (t.cents[i] as number) * 2 ** 20 + i;
     keys.sort();
     for (let i = 0; i < n; i++) t.order[i] = (keys[i] as number) % 2 ** 20;

@@ -10,8 +10,7 @@ import type { BoundExchange } from "./sweep";
 
 const CTL = 8; // int32 slots: 0 cancel, 1 points written, 2 visited, 3 kept, 4 candidates announced, 5 parts announced
 const CAPACITY = 1 << 15;
-const MAX_PARTS = 64;
-const FINISHED = 0x7fffffff;
+
 
 export interface SharedBounds {
   buffer: SharedArrayBuffer;
@@ -19,7 +18,7 @@ export interface SharedBounds {
 
 /** A fresh shared area for one search. */
 export function createSharedBounds(): SharedBounds {
-  const bytes = CTL * 4 + CAPACITY * 4 + CAPACITY * 3 * 8 + MAX_PARTS * 4;
+  const bytes = CTL * 4 + CAPACITY * 4 + CAPACITY * 3 * 8;
   return { buffer: new SharedArrayBuffer(bytes) };
 }
 
@@ -27,9 +26,7 @@ function views(buffer: SharedArrayBuffer) {
   const ctl = new Int32Array(buffer, 0, CTL);
   const ready = new Int32Array(buffer, CTL * 4, CAPACITY);
   const pts = new Float64Array(buffer, CTL * 4 + CAPACITY * 4, CAPACITY * 3);
-  // cost position of each part, cents + 1 (0: not started, FINISHED: done)
-  const pos = new Int32Array(buffer, CTL * 4 + CAPACITY * 4 + CAPACITY * 3 * 8, MAX_PARTS);
-  return { ctl, ready, pts, pos };
+  return { ctl, ready, pts };
 }
 
 /** Asks every worker of the search to stop at its next check (within a few candidates). */
@@ -44,50 +41,15 @@ export function readProgress(b: SharedBounds): { visited: number; kept: number; 
 }
 
 /** The exchange one worker (or the in-process search) uses. */
-export interface Lockstep {
-  part: number;
-  parts: number;
-  /** how far (cents) a part may run ahead of the slowest running part */
-  lead: number;
-}
-
-/**
- * The exchange one worker (or the in-process search) uses. With `lockstep` (parts running at
- * the same time), a part that gets more than `lead` cents ahead of the slowest running part
- * waits for it, so that each part sees the others' passing points of the costs it is at:
- * otherwise the faster part evaluates candidates the slower part's points would have pruned.
- */
+/** The exchange one worker (or the in-process search) uses. */
 export function sharedExchange(
   b: SharedBounds,
   signal?: AbortSignal,
-  lockstep?: Lockstep,
-): BoundExchange & { tick(visited: number): void; announce(candidates: number): void; at(cents: number): void; begin(): void; finish(): void } {
-  const { ctl, ready, pts, pos } = views(b.buffer);
+): BoundExchange & { tick(visited: number): void; announce(candidates: number): void } {
+  const { ctl, ready, pts } = views(b.buffer);
   let seen = 0;
   const cancelled = () => Atomics.load(ctl, 0) === 1 || signal?.aborted === true;
   return {
-    at(cents: number) {
-      if (lockstep === undefined || lockstep.part >= MAX_PARTS) return;
-      const me = Math.min(FINISHED - 1, Math.floor(cents) + 1);
-      Atomics.store(pos, lockstep.part, me);
-      for (let spins = 0; spins < 20000; spins++) {
-        let slowest = FINISHED;
-        for (let j = 0; j < Math.min(lockstep.parts, MAX_PARTS); j++) {
-          if (j === lockstep.part) continue;
-          const p = Atomics.load(pos, j);
-          if (p !== 0 && p < slowest) slowest = p;
-        }
-        if (slowest === FINISHED || me <= slowest + lockstep.lead || cancelled()) return;
-        Atomics.wait(pos, lockstep.part, me, 0.2); // a short nap; nobody needs to wake us
-      }
-    },
-    /** marks this part as running from cost 0, so the others wait for its first candidates */
-    begin() {
-      if (lockstep !== undefined && lockstep.part < MAX_PARTS) Atomics.store(pos, lockstep.part, 1);
-    },
-    finish() {
-      if (lockstep !== undefined && lockstep.part < MAX_PARTS) Atomics.store(pos, lockstep.part, FINISHED);
-    },
     pull(util: Staircase, carbon: Staircase) {
       const written = Math.min(Atomics.load(ctl, 1), CAPACITY);
       while (seen < written) {

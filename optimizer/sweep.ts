@@ -42,8 +42,6 @@ export interface BoundExchange {
   push(cents: number, utilUnits: number, carbonUnits: number): void;
   /** true once the search is cancelled */
   cancelled(): boolean;
-  /** the sweep has reached this cost (cents); may wait for slower parts */
-  at?(cents: number): void;
 }
 
 export interface EvaluatedCandidate {
@@ -124,9 +122,8 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
   const exhaustive = opts.exhaustive === true;
   for (let pos = opts.from; pos < opts.to; pos++) {
     const cents = visit[4 * pos] as number;
-    if ((pos - opts.from) % 64 === 0) {
+    if ((pos - opts.from) % 32 === 0) {
       if (opts.exchange.cancelled()) break;
-      opts.exchange.at?.(cents);
       opts.exchange.pull(util, carb);
     }
     visited++;

@@ -8,7 +8,8 @@
  * space, whose fronts are compared with the pruned ones.
  *
  *   npm run bench:optimizer                 # everything (the exhaustive run takes minutes)
- *   npm run bench:optimizer -- --runs 5     # more timed runs per thread count
+ *   npm run bench:optimizer -- --runs 5     # more timed runs per thread count (default 3)
+ *   npm run bench:optimizer -- --warmup 3   # untimed runs before timing (default 3)
  *   npm run bench:optimizer -- --no-exhaustive
  */
 import os from "node:os";
@@ -43,6 +44,9 @@ const args = process.argv.slice(2);
 const runsArg = args.indexOf("--runs");
 const runs = runsArg >= 0 ? Math.max(1, Number(args[runsArg + 1]) || 3) : 3;
 const exhaustive = !args.includes("--no-exhaustive");
+const warmArg = args.indexOf("--warmup");
+// both threads need a few runs before the JIT has compiled the hot loops
+const warmups = warmArg >= 0 ? Math.max(0, Number(args[warmArg + 1]) || 0) : 3;
 
 const median = (xs: number[]) => {
   const s = [...xs].sort((a, b) => a - b);
@@ -57,15 +61,40 @@ async function timed(threads: number, pool: ReturnType<typeof getOptimizerPool>)
   return { wall: performance.now() - t0, r };
 }
 
+/** How much faster two threads of plain arithmetic run than one on this machine right now:
+ * the ceiling for any 2-thread figure below (other work on a shared machine lowers it). */
+async function calibrate(): Promise<number> {
+  const { Worker } = await import("node:worker_threads");
+  const code = `const { parentPort } = require("node:worker_threads");
+    parentPort.on("message", (n) => { let x = 0; for (let i = 0; i < n; i++) x += Math.sqrt(i); parentPort.postMessage(x); });`;
+  const ws = [new Worker(code, { eval: true }), new Worker(code, { eval: true })];
+  const run = (w: InstanceType<typeof Worker>, n: number) => new Promise((r) => { w.once("message", r); w.postMessage(n); });
+  const N = 1e8;
+  await Promise.all(ws.map((w) => run(w, 1e6)));
+  let t = performance.now();
+  await run(ws[0] as InstanceType<typeof Worker>, N);
+  const one = performance.now() - t;
+  t = performance.now();
+  await Promise.all(ws.map((w) => run(w, N / 2)));
+  const two = performance.now() - t;
+  await Promise.all(ws.map((w) => w.terminate()));
+  return one / two;
+}
+
 async function main(): Promise<void> {
   const bundle = (await ensureWorkerBundle()) as string;
-  console.log(`machine: ${os.availableParallelism()} cores, Node ${process.version}; worker ${bundle}`);
+  console.log(`machine: ${os.availableParallelism()} cores, Node ${process.version}, load average ${os.loadavg().map((x) => x.toFixed(1)).join(" ")}; worker ${bundle}`);
+  console.log(`calibration: 2 threads of plain arithmetic run ${(await calibrate()).toFixed(2)}× faster than 1 here now (the ceiling for the speed-up below)`);
   const pool = getOptimizerPool({ filename: bundle, maxThreads: 2 });
 
   const cold1 = await timed(1, pool);
   const cold2 = await timed(2, pool);
   console.log(`space: ${cold1.r.stats.candidates} candidates after the detailing limits; ${loads.length} load cases`);
   console.log(`cold (first run, threads starting): 1 thread ${ms(cold1.wall)}, 2 threads ${ms(cold2.wall)}`);
+  for (let i = 0; i < warmups; i++) {
+    await timed(2, pool);
+    await timed(1, pool);
+  }
 
   const t1: number[] = [];
   const t2: number[] = [];
@@ -118,6 +147,7 @@ async function main(): Promise<void> {
     console.log(`  wall time exhaustive / pruned (2 threads): ${(wall / m2).toFixed(0)}×`);
   }
   console.log("");
+  console.log(`calibration after: ${(await calibrate()).toFixed(2)}×; load average ${os.loadavg().map((x) => x.toFixed(1)).join(" ")}`);
   console.log(`targets: ≥ 10× fewer full checks than exhaustive; < 2000 ms with 2 threads (${ms(m2)}); 2 threads ≥ 1.7× faster (${(m1 / m2).toFixed(2)}×)`);
   await closeOptimizerPools();
 }
