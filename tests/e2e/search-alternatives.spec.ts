@@ -167,6 +167,16 @@ test("search a slender demo mark, filter, compare, propose as estimator, approve
   const proposedMail = await waitForMail(engineerMail, { subject: "Alternative proposed for column B-3", after: mailBefore });
   expect(proposedMail.subject).toContain(firstId);
 
+  // A search over the whole default space can be cancelled while it runs (or waits for a worker).
+  await e.goto(`${markUrl}/searches`);
+  await e.getByRole("form", { name: "Search space" }).getByRole("button", { name: "Start search" }).click();
+  await expect(e.getByTestId("search-item")).toHaveCount(2);
+  const big = e.getByTestId("search-item").first();
+  await big.getByRole("button", { name: "Cancel search" }).click();
+  await expect(big.getByTestId("search-status")).toHaveText("cancelled");
+  await expect(big.getByRole("link", { name: "Open results" })).toHaveCount(0);
+  await expect(e.getByTestId("search-item").nth(1).getByTestId("search-status")).toHaveText("finished");
+
   // The engineer approves it with a comment; turning down without one is refused beside the field.
   const engineer = await signedIn(browser, "engineer");
   const g = engineer.page;
