@@ -183,7 +183,8 @@ export function CandidateCompare({ candidates, base, priceBook, cover, units, on
             ))}
           </div>
         </div>
-        <div className={`grid gap-4 ${gridCols}`}>
+        {/* Two diagrams a row at most: the charts need the width for their legends and axes. */}
+        <div className={`grid gap-4 ${candidates.length > 1 ? "md:grid-cols-2" : ""}`}>
           {candidates.map((c, i) => {
             const d = diagrams[i];
             const out = checks[i]?.data;
