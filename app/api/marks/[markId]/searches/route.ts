@@ -3,9 +3,9 @@ import { handler } from "@/lib/api/handler";
 import { notFound } from "@/lib/api/errors";
 import { authorizeMark } from "@/lib/authz";
 import { readMarkInputs } from "@/db/queries/search-inputs";
-import { insertSearch, listSearchesOfMark, setSearchJobId } from "@/db/queries/searches";
-import { buildSearchRequest, fingerprintMark, startSearchSchema } from "@/lib/search-request";
-import { enqueueSearch } from "@/lib/jobs/search-queue";
+import { listSearchesOfMark } from "@/db/queries/searches";
+import { fingerprintMark, startSearchSchema } from "@/lib/search-request";
+import { queueSearchForMark } from "@/lib/jobs/queue-search";
 import { recordAudit } from "@/lib/audit";
 import { toSearchView } from "@/lib/search-view";
 
@@ -27,23 +27,14 @@ export const POST = handler({ body: startSearchSchema }, async ({ user, params, 
   const access = await authorizeMark(user, params.markId ?? "", "runSearch");
   const inputs = await readMarkInputs(access.markId);
   if (!inputs) throw notFound("column mark not found");
-  const request = buildSearchRequest(inputs, body);
-  const search = await insertSearch({
-    markId: access.markId,
-    request,
-    inputsHash: fingerprintMark(inputs),
-    priceBookId: inputs.priceBook?.id ?? null,
-    createdBy: access.user.id,
-  });
-  const jobId = await enqueueSearch(search.id);
-  await setSearchJobId(search.id, jobId);
+  const search = await queueSearchForMark(inputs, body, access.user.id);
   await recordAudit({
     workspaceId: access.workspaceId,
     userId: access.user.id,
     action: "search.start",
     entity: "search",
     entityId: search.id,
-    after: { markId: access.markId, space: request.space ?? null },
+    after: { markId: access.markId, space: (search.request as { space?: unknown }).space ?? null },
   });
-  return NextResponse.json({ search: toSearchView({ ...search, jobId }, search.inputsHash) }, { status: 201 });
+  return NextResponse.json({ search: toSearchView(search, search.inputsHash) }, { status: 201 });
 });

@@ -3,9 +3,7 @@ import { handler } from "@/lib/api/handler";
 import { authorizeProject } from "@/lib/authz";
 import { readProjectSearchResults } from "@/db/queries/project-searches";
 import { readMarkInputs } from "@/db/queries/search-inputs";
-import { insertSearch, setSearchJobId } from "@/db/queries/searches";
-import { buildSearchRequest, fingerprintMark } from "@/lib/search-request";
-import { enqueueSearch } from "@/lib/jobs/search-queue";
+import { queueSearchForMark } from "@/lib/jobs/queue-search";
 import { recordAudit } from "@/lib/audit";
 import { HttpError } from "@/lib/api/errors";
 
@@ -23,15 +21,7 @@ export const POST = handler({}, async ({ user, params }) => {
     const inputs = await readMarkInputs(mark.id);
     if (!inputs) continue;
     try {
-      const request = buildSearchRequest(inputs, {});
-      const row = await insertSearch({
-        markId: mark.id,
-        request,
-        inputsHash: fingerprintMark(inputs),
-        priceBookId: inputs.priceBook?.id ?? null,
-        createdBy: access.user.id,
-      });
-      await setSearchJobId(row.id, await enqueueSearch(row.id));
+      const row = await queueSearchForMark(inputs, {}, access.user.id);
       queued.push({ markId: mark.id, label: mark.label, searchId: row.id });
     } catch (error) {
       if (!(error instanceof HttpError)) throw error;
