@@ -80,5 +80,7 @@ elif [ -d "$NEXT_DIST_DIR" ]; then
   fi
 fi
 
+# Stop the services first, so the totals are the very last line CI reads.
+cleanup
 echo "$PASSED passed, $FAILED failed"
 [ "$FAILED" = 0 ]
