@@ -1,33 +1,11 @@
 "use client";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { callApi } from "@/components/projects/api";
+import type { StandardizeAssignmentEntry, StandardizeResult } from "@/optimizer/standardize";
 
-export interface AssignmentEntry {
-  markId: string;
-  label: string;
-  level: string | null;
-  candidateId: string;
-  outline: string;
-  fc: number;
-  utilization: number;
-  cost: number;
-  quantity: number;
-  extended: number;
-  ownCheapestCost: number;
-}
-
-export interface SweepEntry {
-  feasible: boolean;
-  maxOutlines: number;
-  totalCost: number | null;
-  columnsCost: number | null;
-  formSetsCost: number | null;
-  outlines: Array<{ key: string; columns: number; marks: string[] }>;
-  assignment: AssignmentEntry[];
-  reasons: string[];
-  assumptions: string[];
-  stats: { method: string; ms: number; optimal: boolean };
-}
+/** The solver's own shapes, as the route sends them (candidates stay on the server side of the screen). */
+export type AssignmentEntry = Omit<StandardizeAssignmentEntry, "candidate">;
+export type SweepEntry = Omit<StandardizeResult, "assignment"> & { assignment: AssignmentEntry[] };
 
 export interface StandardizationResponse {
   formSetCost: number;

@@ -5,6 +5,7 @@
  */
 import { asc, desc, eq } from "drizzle-orm";
 import { getDb } from "../client";
+import { notFound } from "@/lib/api/errors";
 import { columnMarks, loadCombinations, priceBooks, projects } from "../schema";
 
 export interface MarkInputs {
@@ -34,4 +35,11 @@ export async function readMarkInputs(markId: string): Promise<MarkInputs | null>
     .orderBy(desc(priceBooks.revision))
     .limit(1);
   return { mark: row.mark, project: row.project, loads, priceBook: priceBook ?? null };
+}
+
+/** As readMarkInputs, for routes that have already authorized the mark: a vanished mark is a 404. */
+export async function requireMarkInputs(markId: string): Promise<MarkInputs> {
+  const inputs = await readMarkInputs(markId);
+  if (!inputs) throw notFound("column mark not found");
+  return inputs;
 }

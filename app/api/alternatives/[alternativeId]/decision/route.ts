@@ -1,8 +1,7 @@
 import { handler } from "@/lib/api/handler";
-import { notFound } from "@/lib/api/errors";
 import { authorizeAlternative } from "@/lib/authz-alternative";
 import { decideAlternative } from "@/db/queries/alternatives";
-import { readMarkInputs } from "@/db/queries/search-inputs";
+import { requireMarkInputs } from "@/db/queries/search-inputs";
 import { findUserById } from "@/db/queries/users";
 import { decideAlternativeSchema } from "@/lib/validation/alternative";
 import { designFromCandidateId } from "@/lib/candidate-design";
@@ -17,8 +16,7 @@ export const dynamic = "force-dynamic";
 /** Engineers (and owners) approve or reject a proposal; approving sets the mark's design. */
 export const POST = handler({ body: decideAlternativeSchema }, async ({ user, params, body }) => {
   const access = await authorizeAlternative(user, params.alternativeId ?? "", "approveAlternative");
-  const inputs = await readMarkInputs(access.markId);
-  if (!inputs) throw notFound("column mark not found");
+  const inputs = await requireMarkInputs(access.markId);
   const design = designFromCandidateId(access.alternative.candidateId, inputs.project.cover);
   const decided = await decideAlternative({
     id: access.alternative.id,

@@ -1,8 +1,7 @@
 import { handler } from "@/lib/api/handler";
-import { notFound } from "@/lib/api/errors";
 import { authorizeAlternative } from "@/lib/authz-alternative";
 import { refreshAlternative } from "@/db/queries/alternatives";
-import { readMarkInputs } from "@/db/queries/search-inputs";
+import { requireMarkInputs } from "@/db/queries/search-inputs";
 import { designFromCandidateId } from "@/lib/candidate-design";
 import { buildMarkCheckInput } from "@/lib/mark-check-input";
 import { fingerprintMark } from "@/lib/search-request";
@@ -20,8 +19,7 @@ export const dynamic = "force-dynamic";
  */
 export const POST = handler({}, async ({ user, params }) => {
   const access = await authorizeAlternative(user, params.alternativeId ?? "", "runSearch");
-  const inputs = await readMarkInputs(access.markId);
-  if (!inputs) throw notFound("column mark not found");
+  const inputs = await requireMarkInputs(access.markId);
   const design = designFromCandidateId(access.alternative.candidateId, inputs.project.cover);
   const check = checkMember(buildMarkCheckInput(inputs, design));
   let row = access.alternative;

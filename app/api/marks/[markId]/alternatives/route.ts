@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { handler } from "@/lib/api/handler";
 import { notFound, unprocessable } from "@/lib/api/errors";
 import { authorizeMark } from "@/lib/authz";
-import { readMarkInputs } from "@/db/queries/search-inputs";
+import { requireMarkInputs } from "@/db/queries/search-inputs";
 import { findCandidate, findSearch } from "@/db/queries/searches";
 import { insertProposal, listAlternativesOfMark } from "@/db/queries/alternatives";
 import { fingerprintMark } from "@/lib/search-request";
@@ -16,8 +16,7 @@ export const dynamic = "force-dynamic";
 
 export const GET = handler({}, async ({ user, params }) => {
   const access = await authorizeMark(user, params.markId ?? "", "read");
-  const inputs = await readMarkInputs(access.markId);
-  if (!inputs) throw notFound("column mark not found");
+  const inputs = await requireMarkInputs(access.markId);
   const current = fingerprintMark(inputs);
   const rows = await listAlternativesOfMark(access.markId);
   return { alternatives: rows.map((row) => toAlternativeView(row, current)) };
@@ -30,8 +29,7 @@ export const POST = handler({ body: proposeAlternativeSchema }, async ({ user, p
   if (!search || search.markId !== access.markId) throw notFound("search not found");
   const candidate = await findCandidate(search.id, body.candidateId);
   if (!candidate) throw unprocessable("no such passing candidate in that search", [{ path: "candidateId", message: `${body.candidateId} is not among the search's results` }]);
-  const inputs = await readMarkInputs(access.markId);
-  if (!inputs) throw notFound("column mark not found");
+  const inputs = await requireMarkInputs(access.markId);
   const row = await insertProposal({
     markId: access.markId,
     searchId: search.id,

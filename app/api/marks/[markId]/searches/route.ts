@@ -1,8 +1,7 @@
 import { NextResponse } from "next/server";
 import { handler } from "@/lib/api/handler";
-import { notFound } from "@/lib/api/errors";
 import { authorizeMark } from "@/lib/authz";
-import { readMarkInputs } from "@/db/queries/search-inputs";
+import { requireMarkInputs } from "@/db/queries/search-inputs";
 import { listSearchesOfMark } from "@/db/queries/searches";
 import { fingerprintMark, startSearchSchema } from "@/lib/search-request";
 import { queueSearchForMark } from "@/lib/jobs/queue-search";
@@ -15,8 +14,7 @@ export const dynamic = "force-dynamic";
 /** Searches of a mark, newest first. */
 export const GET = handler({}, async ({ user, params }) => {
   const access = await authorizeMark(user, params.markId ?? "", "read");
-  const inputs = await readMarkInputs(access.markId);
-  if (!inputs) throw notFound("column mark not found");
+  const inputs = await requireMarkInputs(access.markId);
   const current = fingerprintMark(inputs);
   const rows = await listSearchesOfMark(access.markId);
   return { searches: rows.map((row) => toSearchView(row, current)) };
@@ -25,8 +23,7 @@ export const GET = handler({}, async ({ user, params }) => {
 /** Stores the request (space, price book, loads) and queues it for a worker. */
 export const POST = handler({ body: startSearchSchema }, async ({ user, params, body }) => {
   const access = await authorizeMark(user, params.markId ?? "", "runSearch");
-  const inputs = await readMarkInputs(access.markId);
-  if (!inputs) throw notFound("column mark not found");
+  const inputs = await requireMarkInputs(access.markId);
   const search = await queueSearchForMark(inputs, body, access.user.id);
   await recordAudit({
     workspaceId: access.workspaceId,
