@@ -11,7 +11,7 @@ import {
 /*
  * Published worked example: J. K. Wight and J. G. MacGregor, "Reinforced Concrete: Mechanics and
  * Design", 6th ed. (Pearson, 2012), Chapter 12 "Slender Columns", Example 12-2 "Column Design in
- * Braced Frames", p. 596 — column C–D of an industrial frame, f'c = 4000 psi, fy = 60 000 psi,
+ * Braced Frames", p. 596 (edition and page from memory) — column C–D of an industrial frame, f'c = 4000 psi, fy = 60 000 psi,
  * 14-in columns. The book works under ACI 318-11, whose sign convention is the reverse of
  * ACI 318-19's (there M1 is negative in double curvature). Values quoted from the published text:
  *   Pu = 1.2 × 80 + 1.6 × 24 = 134 kips
