@@ -12,7 +12,7 @@ const markBody = (label: string, lu: number) => ({ label, level: "Podium", quant
 test("an engineer searches the missing marks and adopts a one-outline set for the whole project", async ({ page }) => {
   test.setTimeout(240_000);
   const workspaceId = await signInAsEngineer(page);
-  const { base, projectId, markId } = await createProjectWithMark(page, workspaceId, uniqueName("Form reuse"), markBody("P-1", 240));
+  const { base, projectId, markId } = await createProjectWithMark(page, workspaceId, uniqueName("Podium block"), markBody("P-1", 240));
   const second = await page.request.post(`/api/projects/${projectId}/marks`, { data: markBody("P-2", 168) });
   expect(second.status()).toBe(201);
   const secondId = ((await second.json()) as { mark: { id: string } }).mark.id;
@@ -22,7 +22,7 @@ test("an engineer searches the missing marks and adopts a one-outline set for th
   }
 
   await page.goto(`${base}/form-reuse`);
-  await expect(page.getByRole("heading", { name: "Form reuse" })).toBeVisible();
+  await expect(page.getByRole("heading", { name: "Form reuse", exact: true })).toBeVisible();
   await expect(page.getByText("2 mark(s) have no finished search yet")).toBeVisible();
   await page.getByRole("button", { name: "Search the missing marks" }).click();
   // The screen polls until both searches have finished, then shows one choice per N.
