@@ -30,9 +30,9 @@ test("an engineer searches the missing marks and adopts a one-outline set for th
   await expect(nOne).toBeVisible({ timeout: 180_000 });
   await expect(page.getByRole("img", { name: /Total cost against the number of distinct section outlines/ })).toBeVisible();
   await nOne.click();
-  await expect(page.getByRole("heading", { name: "N = 1" })).toBeVisible();
-  await expect(page.getByRole("cell", { name: "P-1" })).toBeVisible();
-  await expect(page.getByRole("cell", { name: "P-2" })).toBeVisible();
+  await expect(page.getByRole("heading", { name: "N = 1", exact: true })).toBeVisible();
+  await expect(page.getByRole("cell", { name: "P-1", exact: true })).toBeVisible();
+  await expect(page.getByRole("cell", { name: "P-2", exact: true })).toBeVisible();
   await page.getByLabel("Comment for the team").fill("one form set for the podium");
   await page.getByRole("button", { name: "Adopt this set for all 2 marks" }).click();
   await expect(page.getByRole("status").filter({ hasText: "Adopted:" })).toBeVisible();
