@@ -90,8 +90,20 @@ export async function getLoad(markId: string, loadId: string): Promise<LoadCombi
   return toLoad(row);
 }
 
-export async function updateLoad(markId: string, loadId: string, patch: LoadCombinationUpdate, userId: string, workspaceId: string): Promise<LoadCombination> {
-  const { version, ...changes } = patch;
+type LoadSet = Partial<typeof loadCombinations.$inferInsert>;
+
+/**
+ * The one optimistic write of a row: lock it, refuse a stale version (409 with the current row),
+ * keep names unique, apply the fields, bump the mark and audit before and after.
+ */
+async function writeLoad(
+  markId: string,
+  loadId: string,
+  version: number,
+  fields: (before: LoadCombination) => { set: LoadSet; name: string },
+  userId: string,
+  workspaceId: string,
+): Promise<LoadCombination> {
   return getDb().transaction(async (tx) => {
     const [beforeRow] = await tx
       .select()
@@ -103,18 +115,11 @@ export async function updateLoad(markId: string, loadId: string, patch: LoadComb
     if (before.version !== version) {
       throw conflict(`load combination "${before.name}" was changed by someone else (you had version ${version}, it is now ${before.version})`, before);
     }
-    if (changes.name !== undefined && changes.name !== before.name) await assertNameFree(tx, markId, changes.name, loadId);
-    const set: Partial<typeof loadCombinations.$inferInsert> = { version: before.version + 1, updatedAt: new Date() };
-    if (changes.name !== undefined) set.name = changes.name;
-    if (changes.Pu !== undefined) set.Pu = changes.Pu;
-    if (changes.betaDns !== undefined) set.betaDns = changes.betaDns;
-    if (changes.Mx !== undefined) set.Mx = changes.Mx;
-    // An explicit My replaces the stored one; "My" absent from the patch leaves it. Clearing My is a full-row PUT.
-    if (changes.My !== undefined) set.My = changes.My;
-    if (changes.position !== undefined) set.position = changes.position;
+    const { set, name } = fields(before);
+    if (name !== before.name) await assertNameFree(tx, markId, name, loadId);
     const [afterRow] = await tx
       .update(loadCombinations)
-      .set(set)
+      .set({ ...set, version: before.version + 1, updatedAt: new Date() })
       .where(and(eq(loadCombinations.id, loadId), eq(loadCombinations.version, version)))
       .returning();
     if (!afterRow) throw conflict(`load combination "${before.name}" was changed by someone else`, before);
@@ -123,6 +128,29 @@ export async function updateLoad(markId: string, loadId: string, patch: LoadComb
     await recordAudit({ workspaceId, userId, action: "update", entity: "load_combination", entityId: loadId, before, after }, tx);
     return after;
   });
+}
+
+/** Change the fields given; the rest stay as stored. */
+export async function updateLoad(markId: string, loadId: string, patch: LoadCombinationUpdate, userId: string, workspaceId: string): Promise<LoadCombination> {
+  const { version, ...changes } = patch;
+  return writeLoad(
+    markId,
+    loadId,
+    version,
+    (before) => {
+      const set: LoadSet = {};
+      if (changes.name !== undefined) set.name = changes.name;
+      if (changes.Pu !== undefined) set.Pu = changes.Pu;
+      if (changes.betaDns !== undefined) set.betaDns = changes.betaDns;
+      if (changes.Mx !== undefined) set.Mx = changes.Mx;
+      // An explicit My replaces the stored one; "My" absent from the patch leaves it. Clearing My is a full-row PUT.
+      if (changes.My !== undefined) set.My = changes.My;
+      if (changes.position !== undefined) set.position = changes.position;
+      return { set, name: changes.name ?? before.name };
+    },
+    userId,
+    workspaceId,
+  );
 }
 
 /** Replace every field of a row (My absent = no moment about y), still optimistic. */
@@ -134,38 +162,24 @@ export async function replaceLoad(
   workspaceId: string,
 ): Promise<LoadCombination> {
   const { version, ...row } = input;
-  return getDb().transaction(async (tx) => {
-    const [beforeRow] = await tx
-      .select()
-      .from(loadCombinations)
-      .where(and(eq(loadCombinations.id, loadId), eq(loadCombinations.markId, markId)))
-      .for("update");
-    if (!beforeRow) throw notFound("load combination not found");
-    const before = toLoad(beforeRow);
-    if (before.version !== version) {
-      throw conflict(`load combination "${before.name}" was changed by someone else (you had version ${version}, it is now ${before.version})`, before);
-    }
-    if (row.name !== before.name) await assertNameFree(tx, markId, row.name, loadId);
-    const [afterRow] = await tx
-      .update(loadCombinations)
-      .set({
+  return writeLoad(
+    markId,
+    loadId,
+    version,
+    () => ({
+      set: {
         name: row.name,
         Pu: row.Pu,
         betaDns: row.betaDns,
         Mx: row.Mx,
         My: row.My ?? null,
         ...(row.position !== undefined ? { position: row.position } : {}),
-        version: before.version + 1,
-        updatedAt: new Date(),
-      })
-      .where(and(eq(loadCombinations.id, loadId), eq(loadCombinations.version, version)))
-      .returning();
-    if (!afterRow) throw conflict(`load combination "${before.name}" was changed by someone else`, before);
-    await bumpMark(tx, markId);
-    const after = toLoad(afterRow);
-    await recordAudit({ workspaceId, userId, action: "update", entity: "load_combination", entityId: loadId, before, after }, tx);
-    return after;
-  });
+      },
+      name: row.name,
+    }),
+    userId,
+    workspaceId,
+  );
 }
 
 export async function deleteLoad(markId: string, loadId: string, version: number, userId: string, workspaceId: string): Promise<void> {
