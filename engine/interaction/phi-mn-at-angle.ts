@@ -41,8 +41,9 @@ function wrapAngle(a: number): number {
  * the solutions governs; a direction no neutral axis can produce at this Pu (a strongly
  * unsymmetric section under high axial load) has zero capacity.
  *
- * Warm starts (last c, last tan α / tan θ, last slopes) are kept per section for speed;
- * tolerances are tight enough that results do not depend on them beyond ~1e-10.
+ * The result depends on (section, Pu, θ) only: every call starts from the same state (the
+ * elastic guess tan α = tan θ · Igx/Igy, unit slopes), so it does not matter which cases
+ * ran before on the same section. Warm starts are used only within one call.
  *
  * For a symmetric section θ = 0 and θ = π/2 give exactly phiMnAt about x and about y.
  * Circles: see circleCapacityAt for the project's orientation rule (§7.5).
@@ -68,6 +69,10 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
     const Mn = Math.hypot(tensionOut[1] as number, tensionOut[2] as number);
     return { phiMn: PHI_TENSION * Mn, Mn, phi: PHI_TENSION, c: 0, epsT: tensionOut[3] as number, alpha: theta };
   }
+  // start from the same state on every call: where several roots exist, which branch
+  // the iteration meets first must not depend on earlier calls
+  k.alphaSlope = 1;
+  k.slope = 0;
   st.k = k;
   st.Pu = Pu;
   st.theta = theta;
@@ -78,9 +83,8 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   // |Δθ| ≤ 1e-11 rad, and c solved to 1e-11 P0 at every step: tight enough that the
   // result does not depend on the warm-start state left by earlier calls (beyond ~1e-11)
   const tol = 1e-11;
-  // first guess from the last solution's tan α / tan θ (elastic Igx/Igy at first: the
-  // elastic neutral axis of a moment at θ has tan α = tan θ · Ix/Iy)
-  let a = Math.atan2(k.tanRatio * Math.sin(theta), Math.cos(theta));
+  // first guess: the elastic neutral axis of a moment at θ has tan α = tan θ · Ix/Iy
+  let a = Math.atan2(k.elasticTanRatio * Math.sin(theta), Math.cos(theta));
   let fa = errAt(a);
   let alpha = a;
   let found = Math.abs(fa) <= tol || st.degenerate;
@@ -132,11 +136,6 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
     }
   }
   if (!found && !st.degenerate) return scanAngles(k, Pu, theta, tol);
-  const sc = Math.sin(theta) * Math.cos(theta);
-  if (Math.abs(sc) > 1e-3 && !st.degenerate) {
-    const ratio = Math.tan(alpha) / Math.tan(theta);
-    if (ratio > 0.05 && ratio < 20) k.tanRatio = ratio;
-  }
   return capacityAtAlpha(k, Pu, theta, alpha, st.lastAlpha === alpha ? st.guess : Number.NaN);
 }
 

@@ -1,5 +1,5 @@
 import type { ResolvedSection } from "../types";
-import { evaluate, kernelOf, setDirection, type Direction } from "./section-kernel";
+import { evaluate, kernelOf, newDirection, setDirection } from "./section-kernel";
 import { phiOf } from "./phi-factor";
 
 /** Nominal forces of a section at one neutral-axis position. */
@@ -44,10 +44,7 @@ export function sectionForcesAt(section: ResolvedSection, angleRad: number, c: n
   if (typeof angleRad !== "number" || !Number.isFinite(angleRad)) throw new RangeError(`angleRad must be finite (got ${String(angleRad)})`);
   if (typeof c !== "number" || Number.isNaN(c) || c < 0) throw new RangeError(`c must be ≥ 0 (got ${String(c)})`);
   const k = kernelOf(section);
-  const dir: Direction = {
-    ux: 0, uy: 0, tmax: 0, depth: 0, d: new Array<number>(k.n).fill(0), dt: 0, cFull: 0, cP0: 0,
-  };
-  setDirection(k, snapUnit(Math.sin(angleRad)), snapUnit(Math.cos(angleRad)), dir);
+  const dir = setDirection(k, snapUnit(Math.sin(angleRad)), snapUnit(Math.cos(angleRad)), newDirection(k));
   const out = new Float64Array(4);
   evaluate(k, dir, c, out);
   const epsT = out[3] as number;

@@ -41,6 +41,16 @@ export interface Direction {
   cFull: number;
   /** smallest c at which Pn = P0 (block full and every bar yielded in compression) */
   cP0: number;
+  /**
+   * Bars at the same depth strain alike, so evaluate() sums them as one layer: layer depth,
+   * area, Σ A·y and Σ A·x. Uniaxial directions group the bars (a 4 × 4 perimeter has 4
+   * layers); any other direction keeps one layer per bar.
+   */
+  nl: number;
+  ld: number[];
+  lA: number[];
+  lAy: number[];
+  lAx: number[];
 }
 
 /**
@@ -63,6 +73,9 @@ export interface Kernel {
   bx: number[];
   by: number[];
   ba: number[];
+  /** area × y and area × x of each bar (the per-bar layers of an arbitrary direction) */
+  bay: number[];
+  bax: number[];
   circle: boolean;
   halfB: number;
   halfH: number;
@@ -86,12 +99,12 @@ export interface Kernel {
   uni: (Direction | undefined)[];
   scans: (Scan | undefined)[];
   halfPitch?: ResolvedSection;
-  /** last secant slope dφPn/dc seen by the warm-start solver (kip/in) */
+  /** last secant slope dφPn/dc seen by the warm-start solver (kip/in; reset per biaxial call) */
   slope: number;
-  /** last slope dθ/dα seen by the biaxial angle iteration */
+  /** last slope dθ/dα seen by the biaxial angle iteration (reset per call) */
   alphaSlope: number;
-  /** tan α / tan θ of the last biaxial solution (first guess of the next); starts at Igx/Igy */
-  tanRatio: number;
+  /** Igx/Igy: tan α / tan θ of the elastic neutral axis, the first guess of every biaxial call */
+  elasticTanRatio: number;
   /** reusable direction for arbitrary angles */
   scratchDir: Direction;
 }
@@ -128,6 +141,14 @@ function isMirrored(bx: number[], by: number[], ba: number[], sx: number, sy: nu
   return true;
 }
 
+/** A packed array of n doubles (new Array(n) would make a holey one, slower to read). @internal */
+export function zeros(n: number): number[] {
+  const a: number[] = [];
+  for (let i = 0; i < n; i++) a.push(0.5);
+  a.fill(0);
+  return a;
+}
+
 /** Kernel of a resolved section (built once, cached). */
 export function kernelOf(section: ResolvedSection): Kernel {
   const hit = (section as WithKernel)[KERNEL] ?? frozenCache.get(section);
@@ -153,6 +174,8 @@ export function kernelOf(section: ResolvedSection): Kernel {
     bx,
     by,
     ba,
+    bay: ba.map((a, i) => a * (by[i] as number)),
+    bax: ba.map((a, i) => a * (bx[i] as number)),
     circle: section.shape === "circle",
     halfB: section.b / 2,
     halfH: section.h / 2,
@@ -172,11 +195,10 @@ export function kernelOf(section: ResolvedSection): Kernel {
     scans: [undefined, undefined, undefined, undefined],
     slope: 0,
     alphaSlope: 1,
-    tanRatio: section.Igy > 0 ? section.Igx / section.Igy : 1,
-    scratchDir: {
-      ux: 0, uy: 1, tmax: 0, depth: 0, d: new Array<number>(n).fill(0), dt: 0, cFull: 0, cP0: 0,
-    },
+    elasticTanRatio: section.Igy > 0 ? section.Igx / section.Igy : 1,
+    scratchDir: undefined as unknown as Direction,
   };
+  k.scratchDir = newDirection(k);
   if (Object.isExtensible(section)) {
     Object.defineProperty(section, KERNEL, { value: k, enumerable: false, configurable: true, writable: true });
   } else frozenCache.set(section, k);
@@ -189,7 +211,48 @@ export function halfPitchOf(k: Kernel): ResolvedSection {
   return k.halfPitch;
 }
 
-/** Fill `dir` for the unit vector (ux, uy). */
+/** An empty direction record for a kernel (filled by setDirection). @internal */
+export function newDirection(k: Kernel): Direction {
+  const d = zeros(k.n);
+  return {
+    ux: 0, uy: 0, tmax: 0, depth: 0, d, dt: 0, cFull: 0, cP0: 0,
+    nl: k.n, ld: d, lA: k.ba, lAy: k.bay, lAx: k.bax,
+  };
+}
+
+/**
+ * Group the bars of `dir` into layers of equal depth (within 1e-12 of the depth: the
+ * same row of a layout), for the cached uniaxial directions evaluated most often.
+ */
+function groupLayers(k: Kernel, dir: Direction): void {
+  const tol = 1e-12 * (dir.depth > 0 ? dir.depth : 1);
+  const ld: number[] = [];
+  const lA: number[] = [];
+  const lAy: number[] = [];
+  const lAx: number[] = [];
+  for (let i = 0; i < k.n; i++) {
+    const di = dir.d[i] as number;
+    let j = 0;
+    while (j < ld.length && Math.abs((ld[j] as number) - di) > tol) j++;
+    if (j === ld.length) {
+      ld.push(di);
+      lA.push(k.ba[i] as number);
+      lAy.push(k.bay[i] as number);
+      lAx.push(k.bax[i] as number);
+    } else {
+      lA[j] = (lA[j] as number) + (k.ba[i] as number);
+      lAy[j] = (lAy[j] as number) + (k.bay[i] as number);
+      lAx[j] = (lAx[j] as number) + (k.bax[i] as number);
+    }
+  }
+  dir.nl = ld.length;
+  dir.ld = ld;
+  dir.lA = lA;
+  dir.lAy = lAy;
+  dir.lAx = lAx;
+}
+
+/** Fill `dir` for the unit vector (ux, uy) (one layer per bar). */
 export function setDirection(k: Kernel, ux: number, uy: number, dir: Direction): Direction {
   const tmax = k.circle ? k.R : k.halfB * Math.abs(ux) + k.halfH * Math.abs(uy);
   const depth = 2 * tmax;
@@ -223,9 +286,8 @@ const UNI_UY = [1, 0, -1, 0] as const;
 export function uniDirection(k: Kernel, idx: 0 | 1 | 2 | 3): Direction {
   let dir = k.uni[idx];
   if (dir === undefined) {
-    dir = setDirection(k, UNI_UX[idx], UNI_UY[idx], {
-      ux: 0, uy: 0, tmax: 0, depth: 0, d: new Array<number>(k.n).fill(0), dt: 0, cFull: 0, cP0: 0,
-    });
+    dir = setDirection(k, UNI_UX[idx], UNI_UY[idx], newDirection(k));
+    groupLayers(k, dir);
     k.uni[idx] = dir;
   }
   return dir;
@@ -296,15 +358,18 @@ export function evaluate(k: Kernel, dir: Direction, c: number, out: Float64Array
   let my = Cc * xc;
   const esEps = k.es * EPS_CU;
   const inv = 1 / c;
-  const d = dir.d;
-  for (let i = 0; i < n; i++) {
-    const di = d[i] as number;
+  const nl = dir.nl;
+  const ld = dir.ld;
+  const lA = dir.lA;
+  const lAy = dir.lAy;
+  const lAx = dir.lAx;
+  for (let i = 0; i < nl; i++) {
+    const di = ld[i] as number;
     // branch-free clamp: the yield tests are data-dependent and mispredict
     const fs = Math.max(-fy, Math.min(fy, esEps * (1 - di * inv))) - (di < a ? k85 : 0);
-    const F = fs * (ba[i] as number);
-    P += F;
-    mx += F * (by[i] as number);
-    my += F * (bx[i] as number);
+    P += fs * (lA[i] as number);
+    mx += fs * (lAy[i] as number);
+    my += fs * (lAx[i] as number);
   }
   out[0] = P;
   out[1] = mx;
@@ -413,71 +478,54 @@ export function uniScan(k: Kernel, idx: 0 | 1 | 2 | 3): Scan {
 }
 
 /**
- * Root of φPn(c) − Pu on (lo, hi) where the function is continuous and changes sign
- * (Brent's method: inverse quadratic / secant steps safeguarded by bisection).
+ * Root of φPn(c) − Pu on (lo, hi) where the function is continuous and changes sign.
+ *
+ * Inverse quadratic interpolation through the last three iterates (secant while only two
+ * exist), kept inside the shrinking bracket; a bisection step is taken whenever an
+ * estimate falls outside the bracket or fails to halve the residual, so the bracket
+ * always closes. Between the scan's grid depths φPn(c) is smooth apart from bar-yield
+ * kinks, so 2–4 evaluations reach |φPn − Pu| ≤ 1e-11 P0. The last depth returned was
+ * the last evaluated (callers reuse its forces).
  */
 export function solveC(k: Kernel, dir: Direction, Pu: number, lo: number, flo: number, hi: number, fhi: number): number {
-  let a = lo;
-  let b = hi;
-  let fa = flo;
-  let fb = fhi;
-  if (fa === 0) return a;
-  if (fb === 0) return b;
-  let c = a;
-  let fc = fa;
-  let d = b - a;
-  let e = d;
+  if (flo === 0) return lo;
+  if (fhi === 0) return hi;
   const ftol = 1e-11 * (k.P0 > 0 ? k.P0 : 1);
-  for (let iter = 0; iter < 100; iter++) {
-    if ((fb > 0 && fc > 0) || (fb < 0 && fc < 0)) {
-      c = a;
-      fc = fa;
-      d = b - a;
-      e = d;
-    }
-    if (Math.abs(fc) < Math.abs(fb)) {
-      a = b;
-      b = c;
-      c = a;
-      fa = fb;
-      fb = fc;
-      fc = fa;
-    }
-    const tol = 2e-15 * Math.abs(b) + 1e-13 * dir.cP0;
-    const xm = 0.5 * (c - b);
-    if (Math.abs(xm) <= tol || Math.abs(fb) <= ftol) return b;
-    if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
-      const s = fb / fa;
-      let p: number;
-      let q: number;
-      if (a === c) {
-        p = 2 * xm * s;
-        q = 1 - s;
-      } else {
-        const qq = fa / fc;
-        const r = fb / fc;
-        p = s * (2 * xm * qq * (qq - r) - (b - a) * (r - 1));
-        q = (qq - 1) * (r - 1) * (s - 1);
-      }
-      if (p > 0) q = -q;
-      else p = -p;
-      if (2 * p < Math.min(3 * xm * q - Math.abs(tol * q), Math.abs(e * q))) {
-        e = d;
-        d = p / q;
-      } else {
-        d = xm;
-        e = d;
-      }
-    } else {
-      d = xm;
-      e = d;
-    }
-    a = b;
-    fa = fb;
-    b += Math.abs(d) > tol ? d : xm > 0 ? tol : -tol;
-    fb = phiPnAt(k, dir, b) - Pu;
+  const xtol = 1e-13 * dir.cP0;
+  let a = lo;
+  let fa = flo;
+  let b = hi;
+  // the two previous iterates (the bracket ends to begin with)
+  let x0 = lo;
+  let f0 = flo;
+  let x1 = hi;
+  let f1 = fhi;
+  let x = lo - (flo * (hi - lo)) / (fhi - flo);
+  if (!(x > a && x < b)) x = 0.5 * (a + b);
+  for (let iter = 0; iter < 200; iter++) {
+    const fx = phiPnAt(k, dir, x) - Pu;
+    if (Math.abs(fx) <= ftol) return x;
+    if (fx < 0 === fa < 0) {
+      a = x;
+      fa = fx;
+    } else b = x;
+    if (b - a <= xtol + 2e-15 * Math.abs(x)) return x;
+    let next: number;
+    if (f0 !== f1 && f0 !== fx && f1 !== fx) {
+      next =
+        (x0 * f1 * fx) / ((f0 - f1) * (f0 - fx)) +
+        (x1 * f0 * fx) / ((f1 - f0) * (f1 - fx)) +
+        (x * f0 * f1) / ((fx - f0) * (fx - f1));
+    } else next = x - (fx * (x - x1)) / (fx - f1);
+    // safeguard: bisect when the estimate leaves the bracket or the residual did not halve
+    if (!(next > a && next < b) || Math.abs(fx) > 0.5 * Math.abs(f1)) next = 0.5 * (a + b);
+    x0 = x1;
+    f0 = f1;
+    x1 = x;
+    f1 = fx;
+    x = next;
   }
-  return b;
+  return x;
 }
 
 /** Result of a root search: the governing (smallest-moment) root. */
@@ -491,6 +539,14 @@ export interface RootResult {
 }
 
 const rootOut = new Float64Array(4);
+
+/** Copy [Pn, Mx, My, εt] element by element (TypedArray.set is a native call, slower for 4 values). */
+function copyForces(from: Float64Array, to: Float64Array): void {
+  to[0] = from[0] as number;
+  to[1] = from[1] as number;
+  to[2] = from[2] as number;
+  to[3] = from[3] as number;
+}
 
 /**
  * Every root of φPn(c) = Pu bracketed by the scan; returns the one with the smallest
@@ -507,7 +563,7 @@ export function solveScan(k: Kernel, scan: Scan, Pu: number, px: number, py: num
     if (f0 < 0 === f1 < 0) continue;
     lastEval.c = Number.NaN;
     const c = solveC(k, dir, Pu, cR[i] as number, f0, cL[i + 1] as number, f1);
-    if (c === lastEval.c) rootOut.set(evalOut);
+    if (c === lastEval.c) copyForces(evalOut, rootOut);
     else evaluate(k, dir, c, rootOut);
     // the design capacity φMn decides (§7.6), not Mn: the roots may carry different φ
     const mProj = phiOf(rootOut[3] as number, k.epsTy, k.phiC) * ((rootOut[1] as number) * px + (rootOut[2] as number) * py);
@@ -778,7 +834,7 @@ export function solveMulti(
       lastEval.c = Number.NaN;
       // a root already known to lie in this interval (from the angle iteration) is reused
       const c = known > cPrev && known < cLeft ? known : solveC(k, dir, Pu, cPrev, fPrev, cLeft, fLeft);
-      if (c === lastEval.c) multiOut.set(evalOut);
+      if (c === lastEval.c) copyForces(evalOut, multiOut);
       else evaluate(k, dir, c, multiOut);
       const mProj = phiOf(multiOut[3] as number, k.epsTy, k.phiC) * ((multiOut[1] as number) * px + (multiOut[2] as number) * py);
       if (mProj < best) {
