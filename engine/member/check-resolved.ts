@@ -2,7 +2,7 @@ import { checkDetailing } from "../detailing/check-detailing";
 import { breslerReciprocal } from "../interaction";
 import { computeCarbon } from "../quantities/compute-carbon";
 import { computeCost } from "../quantities/compute-cost";
-import { computeQuantities } from "../quantities/compute-quantities";
+import { computeQuantities, type QuantityDetail } from "../quantities/compute-quantities";
 import type { ChainVariant, MagnifierChain } from "../slenderness/run-magnifier-chain";
 import type {
   AxisResult,
@@ -173,6 +173,23 @@ function buildCase(prep: PreparedMember, load: LoadCase, s: CaseScratch): CaseRe
   };
 }
 
+/** Last quantities per section (searches re-check one section under many load sets). */
+const quantityCache = new WeakMap<ResolvedSection, { L: number; alongH: number; alongB: number; q: QuantityDetail }>();
+
+/** computeQuantities, reused while the section, the length and the cross-ties are the same (read-only result). */
+function quantitiesOf(
+  section: ResolvedSection,
+  member: MemberInput,
+  crossTies: { alongH: number; alongB: number },
+): QuantityDetail {
+  const L = member.pourHeight ?? member.lu;
+  const hit = quantityCache.get(section);
+  if (hit !== undefined && hit.L === L && hit.alongH === crossTies.alongH && hit.alongB === crossTies.alongB) return hit.q;
+  const q = computeQuantities(section, member, crossTies);
+  quantityCache.set(section, { L, alongH: crossTies.alongH, alongB: crossTies.alongB, q });
+  return q;
+}
+
 /** Extra inputs of a check besides section, member and loads. */
 export interface CheckExtras {
   prices?: Prices;
@@ -184,16 +201,16 @@ export interface CheckExtras {
 function validateLoad(load: LoadCase, i: number): void {
   if (typeof load.Pu !== "number" || !Number.isFinite(load.Pu)) throw new RangeError(`loads.${i}.Pu must be a finite number`);
   if (!(load.betaDns >= 0 && load.betaDns <= 1)) throw new RangeError(`loads.${i}.betaDns must be within 0…1 (6.6.4.4.4)`);
-  for (const [m, key] of [[load.Mx, "Mx"], [load.My, "My"]] as const) {
-    if (m === undefined) {
-      if (key === "Mx") throw new RangeError(`loads.${i}.Mx is required`);
-      continue;
-    }
-    if (!(m.M1 >= 0) || !(m.M2 >= 0) || !Number.isFinite(m.M1) || !Number.isFinite(m.M2)) {
-      throw new RangeError(`loads.${i}.${key}: M1 and M2 must be finite magnitudes ≥ 0`);
-    }
-    if (m.M1 > m.M2) throw new RangeError(`loads.${i}.${key}.M1 must not exceed M2 (magnitudes, column-checks.md §3)`);
+  if (load.Mx === undefined) throw new RangeError(`loads.${i}.Mx is required`);
+  validateEndMoments(load.Mx, i, "Mx");
+  if (load.My !== undefined) validateEndMoments(load.My, i, "My");
+}
+
+function validateEndMoments(m: NonNullable<LoadCase["Mx"]>, i: number, key: "Mx" | "My"): void {
+  if (!(m.M1 >= 0) || !(m.M2 >= 0) || !Number.isFinite(m.M1) || !Number.isFinite(m.M2)) {
+    throw new RangeError(`loads.${i}.${key}: M1 and M2 must be finite magnitudes ≥ 0`);
   }
+  if (m.M1 > m.M2) throw new RangeError(`loads.${i}.${key}.M1 must not exceed M2 (magnitudes, column-checks.md §3)`);
 }
 
 /**
@@ -240,7 +257,7 @@ export function checkResolved(
     }
   }
   const { rules, crossTies } = checkDetailing(section, options);
-  const q = computeQuantities(section, member, crossTies);
+  const q = quantitiesOf(section, member, crossTies);
   const detailingOk = rules.every((r) => r.ok);
   const reasons: string[] = [];
   for (const r of rules) if (!r.ok) reasons.push(`detailing ${r.rule} (${r.clause}): ${r.message ?? "fails"}`);

@@ -1,3 +1,4 @@
+import { kernelOf } from "../interaction/section-kernel";
 import { computeRadiusOfGyration } from "../slenderness/compute-radius-of-gyration";
 import { computeSwayMagnifier } from "../slenderness/compute-sway-magnifier";
 import type { AxisConstants } from "../slenderness/run-magnifier-chain";
@@ -38,23 +39,6 @@ export interface PreparedMember {
   displayUnits: "US" | "SI";
   /** report the Bresler comparison on biaxial cases */
   bresler: boolean;
-}
-
-function isMirrored(section: ResolvedSection, sx: number, sy: number): boolean {
-  const bars = section.bars;
-  for (const a of bars) {
-    const x = sx * a.x;
-    const y = sy * a.y;
-    let found = false;
-    for (const b of bars) {
-      if (Math.abs(b.x - x) < 1e-6 && Math.abs(b.y - y) < 1e-6 && Math.abs(b.area - a.area) < 1e-12) {
-        found = true;
-        break;
-      }
-    }
-    if (!found) return false;
-  }
-  return true;
 }
 
 function positive(v: unknown, name: string): number {
@@ -168,8 +152,9 @@ export function prepareMember(section: ResolvedSection, member: MemberInput, opt
     swayX: member.braced ? null : swayState(x, member.sway?.x, "x", options.displayUnits ?? "US"),
     swayY: member.braced ? null : swayState(y, member.sway?.y, "y", options.displayUnits ?? "US"),
     circle,
-    symAboutX: circle || isMirrored(section, 1, -1),
-    symAboutY: circle || isMirrored(section, -1, 1),
+    // the interaction kernel finds the mirror symmetry once per section
+    symAboutX: circle || kernelOf(section).symAboutX,
+    symAboutY: circle || kernelOf(section).symAboutY,
     displayUnits: options.displayUnits ?? "US",
     bresler: options.bresler === true,
   };

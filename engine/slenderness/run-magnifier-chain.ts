@@ -64,8 +64,11 @@ export interface MagnifierChain {
 
 /** A fresh chain record to be filled by runMagnifierChain. @example const chain = createMagnifierChain() */
 export function createMagnifierChain(): MagnifierChain {
-  const v = (): ChainVariant => ({ EI: 0, Pc: 0, Cm: 0, delta: 1, M2: 0, Mc: 0, unstable: false, capExceeded: false });
-  return { m1m2: -1, klur: 0, limit: 0, slender: false, M2min: 0, needsMinimum: false, given: v(), raised: v() };
+  return { m1m2: -1, klur: 0, limit: 0, slender: false, M2min: 0, needsMinimum: false, given: newVariant(), raised: newVariant() };
+}
+
+function newVariant(): ChainVariant {
+  return { EI: 0, Pc: 0, Cm: 0, delta: 1, M2: 0, Mc: 0, unstable: false, capExceeded: false };
 }
 
 function fillVariant(
