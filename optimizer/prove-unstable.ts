@@ -68,14 +68,17 @@ export function proveUnstable(problem: SearchProblem, fam: Family, layoutIndex: 
   if (option !== "a" && option !== "b") return -1;
   const segments = braceLevels + 1;
   const Ec = concreteModulus((problem.fcs[fcIndex] as Valued).v);
-  for (const axis of ["x", "y"] as const) {
+  for (let ax = 0; ax < 2; ax++) {
+    const axis = ax === 0 ? "x" : "y";
     const k = axis === "x" ? m.kx : m.ky;
     const lu = ((axis === "x" ? m.lux : m.luy) ?? m.lu) / segments;
     const depth = fam.shape === "circle" ? fam.D : axis === "x" ? fam.h : fam.b;
     const r = fam.shape === "circle" ? 0.25 * fam.D : 0.3 * depth;
     if (!((k * lu) / r > 40 * (1 + MARGIN))) continue;
     const Ig =
-      fam.shape === "circle" ? (Math.PI * fam.D ** 4) / 64 : axis === "x" ? (fam.b * fam.h ** 3) / 12 : (fam.h * fam.b ** 3) / 12;
+      fam.shape === "circle"
+        ? (Math.PI * fam.D * fam.D * fam.D * fam.D) / 64
+        : axis === "x" ? (fam.b * fam.h * fam.h * fam.h) / 12 : (fam.h * fam.b * fam.b * fam.b) / 12;
     const EI0 = option === "a" ? 0.4 * Ec * Ig : 0.2 * Ec * Ig + ES * (axis === "x" ? ise[0] : ise[1]);
     const pcFactor = (Math.PI * Math.PI) / ((k * lu) * (k * lu));
     for (let i = 0; i < problem.loads.length; i++) {

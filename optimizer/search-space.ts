@@ -39,6 +39,7 @@ import type {
 } from "../engine/types";
 import { defaultSpaceFor, type OptimizeRequest } from "../lib/validation/optimize-request";
 import { formatCandidateId } from "./candidate-id";
+import { sortVisitRecords } from "./sort-visit-records";
 import { toCarbonUnits, toCents, toUtilUnits } from "./pareto-front";
 
 /** A value in engine units with the number the user wrote (ids and output use the latter). */
@@ -263,6 +264,37 @@ function layoutFits(problem: SearchProblem, shape: "rect" | "circle", b: number,
   return minClear >= limit - 1e-9;
 }
 
+interface FaceCount {
+  /** bars on the face, corners included */
+  n: number;
+  /** cross-ties the face needs (25.7.2.3) */
+  need: number;
+}
+
+/**
+ * The bar counts n ≥ 2 that fit one face whose corner bars sit at ±half (clear spacing
+ * ≥ limit, 25.2.3) with their cross-tie needs, cached per half-length for one bar size;
+ * the steel cap then keeps those with 2n ≤ maxCount + 2.
+ */
+function faceCounts(cache: Map<number, FaceCount[]>, half: number, db: number, limit: number, maxCount: number): FaceCount[] {
+  let all = cache.get(half);
+  if (all === undefined) {
+    all = [];
+    for (let n = 2; ; n++) {
+      const xs = spread(-half, half, n);
+      let minGap = Infinity;
+      for (let i = 1; i < n; i++) minGap = Math.min(minGap, Math.abs((xs[i] as number) - (xs[i - 1] as number)));
+      if (!(minGap - db >= limit - 1e-9)) break; // more bars only close the gaps further
+      all.push({ n, need: faceNeed(xs, db) });
+    }
+    cache.set(half, all);
+  }
+  const cap = maxCount + 2;
+  let k = 0;
+  while (k < all.length && 2 * (all[k] as FaceCount).n <= cap) k++;
+  return k === all.length ? all : all.slice(0, k);
+}
+
 /**
  * All families of the space with their valid layouts. Throws nothing for an empty result: an
  * empty space is reported by the search as a reason.
@@ -270,13 +302,12 @@ function layoutFits(problem: SearchProblem, shape: "rect" | "circle", b: number,
 export function enumerateFamilies(problem: SearchProblem, part: { k: number; K: number } = { k: 0, K: 1 }): Family[] {
   const families: Family[] = [];
   const cover = problem.cover;
-  // Families are dealt to the K parts of a parallel search by a fixed hash of their place in
-  // a fixed order (round-robin would put every square outline in the same part).
+  // The candidates are dealt to the K parts of a parallel search layout by layout, by a fixed
+  // hash of (family, layout): the front crowds into a few families (the largest outlines
+  // carry a third of it), so dealing whole families left one part with most of the work.
   let spec = -1;
-  const mine = () => {
-    spec++;
-    return part.K === 1 || ((Math.imul(spec + 1, 0x9e3779b1) >>> 0) % part.K) === part.k;
-  };
+  const mine = (layoutIndex: number) =>
+    part.K === 1 || ((Math.imul((spec + 1) * 4096 + layoutIndex + 1, 0x9e3779b1) >>> 0) % part.K) === part.k;
   for (const fy of problem.fys) {
     for (const size of problem.sizes) {
       const bar = barProperties(size);
@@ -285,9 +316,10 @@ export function enumerateFamilies(problem: SearchProblem, part: { k: number; K: 
       const tieSize = tieSizeFor(size);
       const tie = barProperties(tieSize);
       const edge = cover + tie.db + bar.db / 2;
+      const faceCache = new Map<number, FaceCount[]>();
       for (const { b, h } of problem.rects) {
         if (!problem.confinements.includes("tied")) break;
-        if (!mine()) continue;
+        spec++;
         const xe = b.v / 2 - edge;
         const ye = h.v / 2 - edge;
         if (xe < 0 || ye < 0) continue;
@@ -300,30 +332,16 @@ export function enumerateFamilies(problem: SearchProblem, part: { k: number; K: 
         const limit = Math.max(1.5, 1.5 * bar.db, (4 / 3) * problem.dagg); // 25.2.3
         // The clear spacing of a perimeter layout is the smaller of its two face spacings, so
         // the bar counts that fit each face are found once per face and then paired.
-        const faceB: Array<{ n: number; need: number }> = [];
-        for (let nb = 2; 2 * nb <= maxCount + 2; nb++) {
-          const xs = spread(-xe, xe, nb);
-          let minX = Infinity;
-          for (let i = 1; i < nb; i++) minX = Math.min(minX, Math.abs((xs[i] as number) - (xs[i - 1] as number)));
-          if (!(minX - bar.db >= limit - 1e-9)) break;
-          faceB.push({ n: nb, need: faceNeed(xs, bar.db) });
-        }
-        const faceH: Array<{ n: number; need: number }> = [];
-        for (let nh = 2; 2 * nh <= maxCount + 2; nh++) {
-          const ys = spread(-ye, ye, nh);
-          const side: number[] = [-ye];
-          for (let j = 1; j <= nh - 2; j++) side.push(ys[j] as number);
-          side.push(ye);
-          let minY = Infinity;
-          for (let j = 1; j < side.length; j++) minY = Math.min(minY, Math.abs((side[j] as number) - (side[j - 1] as number)));
-          if (!(minY - bar.db >= limit - 1e-9)) break;
-          faceH.push({ n: nh, need: faceNeed(side, bar.db) });
-        }
+        // a face's bar counts depend on its length and the bar only: found once per face length
+        const faceB = faceCounts(faceCache, xe, bar.db, limit, maxCount);
+        const faceH = faceCounts(faceCache, ye, bar.db, limit, maxCount);
+        let li = -1;
         for (const fb of faceB) {
           for (const fh of faceH) {
             const count = 2 * fb.n + 2 * (fh.n - 2);
             if (count > maxCount) break;
             if (!layoutFits(problem, "rect", b.v, h.v, 0, bar.db, bar.area, count, Infinity, "tied")) continue;
+            if (!mine(++li)) continue;
             layouts.push([fb.n, fh.n]);
             counts.push(count);
             crossTies.push([fb.need, fh.need]);
@@ -342,17 +360,19 @@ export function enumerateFamilies(problem: SearchProblem, part: { k: number; K: 
         const R = D.v / 2 - edge;
         if (R < 0) continue;
         for (const confinement of problem.confinements) {
-          if (!mine()) continue;
+          spec++;
           const layouts: Array<[number, number]> = [];
           const counts: number[] = [];
           const Ag = (Math.PI * D.v * D.v) / 4;
           const cap = problem.rhoMax < 0.08 ? problem.rhoMax : 0.08;
           const maxCount = Math.floor((cap * Ag) / bar.area) + 2;
+          let li = -1;
           for (let n = confinement === "spiral" ? 6 : 4; n <= maxCount; n++) {
             // adjacent bars: the first on +y, the next at 2π/n (as the engine places them)
             const t = (2 * Math.PI) / n;
             const minClear = Math.hypot(0 - R * Math.sin(t), R * Math.cos(0) - R * Math.cos(t)) - bar.db;
             if (!layoutFits(problem, "circle", 0, 0, D.v, bar.db, bar.area, n, minClear, confinement)) continue;
+            if (!mine(++li)) continue;
             layouts.push([n, 0]);
             counts.push(n);
           }
@@ -559,11 +579,14 @@ export function buildCandidateTable(
     order: arrayOf("order", n, (m) => new Uint32Array(m), reuse),
     visit: arrayOf("visit", 4 * n, (m) => new Float64Array(m), reuse),
   };
-  const lb = arrayOf("lb", n, (m) => new Float64Array(m), reuse);
+  // visit records in candidate order: cents, carbon units, lower bound, index × 4 + region
+  const recs = t.visit;
+  let maxCents = 0;
   const maxPu = problem.loads.reduce((m, l) => Math.max(m, l.Pu), -Infinity);
   let k = 0;
   const braceAdd = problem.braceLevels.map((n) => n * problem.prices.brace);
   for (const fam of families) {
+    const region = regionIndexOf(fam);
     const laps = problem.fcs.map((fc) => computeLapLength(fam.fy.v, fam.db, fc.v));
     for (let li = 0; li < fam.layouts.length; li++) {
       let q: Quantity | null = null;
@@ -584,35 +607,33 @@ export function buildCandidateTable(
           t.layout[k] = li;
           t.fc[k] = fi;
           t.brace[k] = bi;
+          const cents = toCents(cost);
+          const carbonUnits = toCarbonUnits(carbon);
           t.cost[k] = cost;
-          t.cents[k] = toCents(cost);
+          t.cents[k] = cents;
           t.carbon[k] = carbon;
-          t.carbonUnits[k] = toCarbonUnits(carbon);
-          lb[k] = lbUnits;
+          t.carbonUnits[k] = carbonUnits;
+          if (cents > maxCents) maxCents = cents;
+          recs[4 * k] = cents;
+          recs[4 * k + 1] = carbonUnits;
+          recs[4 * k + 2] = lbUnits;
+          recs[4 * k + 3] = 4 * k + region;
           k++;
         }
       }
     }
   }
-  // Visit order: by cents (ties by index, which is deterministic). A packed numeric sort is
-  // ~10× faster than a comparator sort on hundreds of thousands of candidates.
-  if (n < 2 ** 20) {
-    const keys = arrayOf("keys", n, (m) => new Float64Array(m), reuse);
-    for (let i = 0; i < n; i++) keys[i] = (t.cents[i] as number) * 2 ** 20 + i;
-    keys.sort();
-    for (let i = 0; i < n; i++) t.order[i] = (keys[i] as number) % 2 ** 20;
-  } else {
-    const idx = Array.from({ length: n }, (_, i) => i);
-    idx.sort((a, b) => (t.cents[a] as number) - (t.cents[b] as number) || a - b);
-    t.order.set(idx);
-  }
+  // Visit order: by cents, ties by index (deterministic), then the region alone in slot 3.
+  // Cents are whole and non-negative (prices ≥ 0); a space costing over $42 million per
+  // column would need a comparison sort instead, and is refused by the radix sort.
+  const sorted = sortVisitRecords(recs, arrayOf("visitSpare", 4 * n, (m) => new Float64Array(m), reuse), n, maxCents);
   for (let pos = 0; pos < n; pos++) {
-    const i = t.order[pos] as number;
-    t.visit[4 * pos] = t.cents[i] as number;
-    t.visit[4 * pos + 1] = t.carbonUnits[i] as number;
-    t.visit[4 * pos + 2] = lb[i] as number;
-    t.visit[4 * pos + 3] = regionIndexOf(families[t.family[i] as number] as Family);
+    const tag = sorted[4 * pos + 3] as number;
+    const region = tag % 4;
+    t.order[pos] = (tag - region) / 4;
+    sorted[4 * pos + 3] = region;
   }
+  t.visit = sorted;
   return t;
 }
 

@@ -22,8 +22,9 @@
  * controlled toward compression-controlled), so "more bars never lower capacity" is false
  * and a bisection on bar count would not be exact (optimizer/README.md has a measured case).
  *
- * Load cases are evaluated in the request's order on a fresh section, as checkResolved does,
- * because the engine's biaxial solver warm-starts from earlier solutions on the same section.
+ * Load cases are evaluated in the request's order, as checkResolved does; a case's utilization
+ * does not depend on the cases evaluated before it (the engine keeps no solver state between
+ * calls), so the numbers are those of the member check and of the exhaustive search.
  */
 import { caseUtilization, prepareMember, resolveSection } from "../engine";
 import type { LoadCase, MemberInput } from "../engine/types";
@@ -120,30 +121,21 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
   const regionTally = regionKeys.map((k) => (regions[k] ??= newTally(nCases)));
   const visit = table.visit;
   const exhaustive = opts.exhaustive === true;
-  for (let pos = opts.from; pos < opts.to; pos++) {
+  const ex = opts.exchange;
+
+  /** Skip test on the points known now; counts the skip. */
+  const dominated = (pos: number): boolean => {
+    if (carb.dominatesAll(visit[4 * pos] as number, visit[4 * pos + 1] as number) && util.dominatesAll(visit[4 * pos] as number, visit[4 * pos + 2] as number)) {
+      (regionTally[visit[4 * pos + 3] as number] as RegionTally).dominated++;
+      return true;
+    }
+    return false;
+  };
+
+  /** Evaluate the candidate at `pos` (stability proof, then the load cases). */
+  const evaluateAt = (pos: number): void => {
     const cents = visit[4 * pos] as number;
-    if ((pos - opts.from) % 32 === 0) {
-      if (opts.exchange.cancelled()) break;
-      opts.exchange.pull(util, carb);
-    }
-    visited++;
-    if (opts.onTick && ++sinceTick >= 256) {
-      opts.onTick(sinceTick, passing.length);
-      sinceTick = 0;
-    }
     const cu = visit[4 * pos + 1] as number;
-    const lbUnits = visit[4 * pos + 2] as number;
-    if (!exhaustive) {
-      // Table 22.4.2.1: the engine fails a case whose Pu exceeds φPn,max before anything else
-      if (lbUnits === Number.POSITIVE_INFINITY) {
-        (regionTally[visit[4 * pos + 3] as number] as RegionTally).axialFails++;
-        continue;
-      }
-      if (carb.dominatesAll(cents, cu) && util.dominatesAll(cents, lbUnits)) {
-        (regionTally[visit[4 * pos + 3] as number] as RegionTally).dominated++;
-        continue;
-      }
-    }
     const i = table.order[pos] as number;
     const famIndex = table.family[i] as number;
     const fam = table.families[famIndex] as Family;
@@ -160,15 +152,11 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
       if (unstable >= 0) {
         tally.unstableFails++;
         tally.failedBy[unstable] = (tally.failedBy[unstable] ?? 0) + 1;
-        continue;
+        return;
       }
     }
     const section = resolveSection(sectionInputOf(problem, { ...fam, fy: fam.fy.v }, fam.layouts[li] as [number, number], fc));
     const prep = prepareMember(section, members[table.brace[i] as number] as MemberInput, problem.options);
-    // Cases in the request's order on a fresh section: the engine's biaxial solver learns
-    // from its previous solutions on a section, so a case's utilization can depend (~1e-4)
-    // on the cases evaluated before it. Evaluating exactly as checkResolved does keeps every
-    // number identical to the member check and to the exhaustive search.
     let worst = -Infinity;
     let governing = -1;
     let outcome: "pass" | "fail" | "dominated" = "pass";
@@ -196,14 +184,35 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
       }
     }
     if (exhaustive) fullChecks++;
-    if (outcome !== "pass") continue;
+    if (outcome !== "pass") return;
     if (!exhaustive) fullChecks++;
     tally.passing++;
     const uu = toUtilUnits(worst);
     util.add(cents, uu);
     carb.add(cents, cu);
-    opts.exchange.push(cents, uu, cu);
+    ex.push(cents, uu, cu);
     passing.push({ index: i, utilization: worst, governing: (loads[governing] as LoadCase).name });
+  };
+
+  for (let pos = opts.from; pos < opts.to; pos++) {
+    if ((pos - opts.from) % 32 === 0) {
+      if (ex.cancelled()) break;
+      ex.pull(util, carb);
+    }
+    visited++;
+    if (opts.onTick && ++sinceTick >= 256) {
+      opts.onTick(sinceTick, passing.length);
+      sinceTick = 0;
+    }
+    if (!exhaustive) {
+      // Table 22.4.2.1: the engine fails a case whose Pu exceeds φPn,max before anything else
+      if ((visit[4 * pos + 2] as number) === Number.POSITIVE_INFINITY) {
+        (regionTally[visit[4 * pos + 3] as number] as RegionTally).axialFails++;
+        continue;
+      }
+      if (dominated(pos)) continue;
+    }
+    evaluateAt(pos);
   }
   if (opts.onTick && sinceTick > 0) opts.onTick(sinceTick, passing.length);
   return { passing, fullChecks, caseChecks, visited, regions };

@@ -19,6 +19,7 @@ import type { LoadCase, SectionInput } from "../../engine/types";
 import { proveUnstable, steelInertiaOf } from "../../optimizer/prove-unstable";
 import { parseOptimizeRequest } from "../../lib/validation/optimize-request";
 import { formatCandidateId, parseCandidateId } from "../../optimizer/candidate-id";
+import { sortVisitRecords } from "../../optimizer/sort-visit-records";
 import {
   buildCandidateTable,
   buildSearchProblem,
@@ -159,6 +160,65 @@ describe("the space a request describes", () => {
     }
     expect(ids.size).toBe(t.n);
     expect([...ids].some((id) => /^c\d+-f4\.5-y60-\d+#8-s-b2$/.test(id))).toBe(true);
+  });
+});
+
+describe("dealing the space to the parts of a parallel search", () => {
+  it("gives every candidate to exactly one of K parts, and the parts are balanced", () => {
+    const p = problemOf({ b: [12, 36, 4], h: [12, 36, 4], D: [16, 28, 4], confinement: ["tied", "spiral"] });
+    const idsOf = (part?: { k: number; K: number }) => {
+      const t = buildCandidateTable(p, enumerateFamilies(p, part));
+      return Array.from({ length: t.n }, (_, i) => candidateIdOf(p, t, i));
+    };
+    const all = idsOf();
+    for (const K of [2, 3]) {
+      const parts = Array.from({ length: K }, (_, k) => idsOf({ k, K }));
+      const union = parts.flat();
+      expect(new Set(union).size).toBe(union.length); // disjoint
+      expect([...union].sort()).toEqual([...all].sort()); // complete
+      // dealt layout by layout: each part holds a share of the largest outline's layouts (the
+      // low-utilization end of the front crowds there), not all or nothing of it
+      const largest = (ids: string[]) => ids.filter((id) => id.startsWith("r36x36-") && id.includes("#8-")).length;
+      for (const ids of parts) expect(largest(ids)).toBeGreaterThan((0.6 * largest(all)) / K);
+    }
+  });
+
+  it("visits candidates by cents, ties by index, as a comparison sort would", () => {
+    const p = problemOf({ b: [12, 24, 4], h: [12, 24, 4], D: [16, 24, 4] });
+    const t = buildCandidateTable(p);
+    const expected = Array.from({ length: t.n }, (_, i) => i).sort((a, b) => (t.cents[a] as number) - (t.cents[b] as number) || a - b);
+    expect(Array.from(t.order)).toEqual(expected);
+    for (let pos = 0; pos < t.n; pos++) {
+      const i = t.order[pos] as number;
+      expect(t.visit[4 * pos]).toBe(t.cents[i]);
+      expect(t.visit[4 * pos + 1]).toBe(t.carbonUnits[i]);
+    }
+  });
+});
+
+describe("sortVisitRecords (radix sort of the visit records)", () => {
+  it("is stable and agrees with a comparison sort over keys spanning several digits", () => {
+    let seed = 7;
+    const rand = () => ((seed = (Math.imul(seed, 1103515245) + 12345) >>> 0) / 2 ** 32);
+    for (const maxKey of [0, 5, 2047, 2048, 5_000_000, 2 ** 32 - 1]) {
+      const n = 3000;
+      const a = new Float64Array(4 * n);
+      for (let i = 0; i < n; i++) {
+        a[4 * i] = Math.floor(rand() * (maxKey + 1));
+        a[4 * i + 1] = i; // original position: shows stability
+        a[4 * i + 2] = -i;
+        a[4 * i + 3] = 4 * i + 1;
+      }
+      const rows = Array.from({ length: n }, (_, i) => [a[4 * i], a[4 * i + 1], a[4 * i + 2], a[4 * i + 3]] as number[]);
+      rows.sort((x, y) => (x[0] as number) - (y[0] as number) || (x[1] as number) - (y[1] as number));
+      const sorted = sortVisitRecords(a, new Float64Array(4 * n), n, maxKey);
+      expect(Array.from(sorted)).toEqual(rows.flat());
+    }
+  });
+
+  it("refuses keys it cannot sort", () => {
+    expect(() => sortVisitRecords(new Float64Array(4), new Float64Array(4), 1, 2 ** 32)).toThrow(RangeError);
+    expect(() => sortVisitRecords(new Float64Array(4), new Float64Array(4), 1, -1)).toThrow(RangeError);
   });
 });
 
