@@ -7,10 +7,11 @@ import { CAUTION, CODE_EDITION } from "../engine";
 import type { CheckOutput } from "../engine/types";
 import { parseOptimizeRequest, type OptimizeRequest } from "../lib/validation/optimize-request";
 import { buildFrontEntry, checkCandidate, type FrontEntry } from "./front-entry";
-import { selectFront, toUtilUnits } from "./pareto-front";
+import { selectFront, toCarbonUnits, toCents, toUtilUnits } from "./pareto-front";
 import {
   buildCandidateTable,
   buildSearchProblem,
+  candidateCostOf,
   candidateIdOf,
   enumerateFamilies,
   phiPnMaxOf,
@@ -110,16 +111,19 @@ export function runSearchTask(task: SearchTask, hooks: { onTick?: () => void; si
   });
   const t3 = performance.now();
   const cancelled = exchange.cancelled();
-  const passing: PassingSummary[] = sweep.passing.map((e) => ({
-    id: candidateIdOf(problem, table, e.index),
-    shape: (table.families[table.family[e.index] as number] as { shape: "rect" | "circle" }).shape,
-    cost: Math.round((table.cost[e.index] as number) * 100) / 100,
-    carbon: Math.round((table.carbon[e.index] as number) * 100) / 100,
-    utilization: Math.round(e.utilization * 1e4) / 1e4,
-    cents: table.cents[e.index] as number,
-    utilUnits: toUtilUnits(e.utilization),
-    carbonUnits: table.carbonUnits[e.index] as number,
-  }));
+  const passing: PassingSummary[] = sweep.passing.map((e) => {
+    const { cost, carbon } = candidateCostOf(problem, table, e.index);
+    return {
+      id: candidateIdOf(problem, table, e.index),
+      shape: (table.families[table.family[e.index] as number] as { shape: "rect" | "circle" }).shape,
+      cost: Math.round(cost * 100) / 100,
+      carbon: Math.round(carbon * 100) / 100,
+      utilization: Math.round(e.utilization * 1e4) / 1e4,
+      cents: toCents(cost),
+      utilUnits: toUtilUnits(e.utilization),
+      carbonUnits: toCarbonUnits(carbon),
+    };
+  });
   // local fronts: every global front member is in its own part's local front
   const byUtil = selectFront(sweep.passing.map((e, k) => ({ id: (passing[k] as PassingSummary).id, a: (passing[k] as PassingSummary).cents, b: (passing[k] as PassingSummary).utilUnits, e })));
   const byCarbon = selectFront(sweep.passing.map((e, k) => ({ id: (passing[k] as PassingSummary).id, a: (passing[k] as PassingSummary).cents, b: (passing[k] as PassingSummary).carbonUnits, e })));

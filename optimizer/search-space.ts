@@ -504,7 +504,8 @@ export function phiPnMaxOf(fam: Family, layoutIndex: number, fc: number): number
 
 /**
  * The whole candidate list: one entry per (family, layout, f'c, brace level), in compact
- * arrays, with exact cost and carbon. `order` lists candidates by cost (cents), then index: the order
+ * arrays; cost and carbon in cents and 0.01 kgCO2e ride in the visit records (exact values
+ * of any one candidate: candidateCostOf). `order` lists candidates by cost (cents), then index: the order
  * the search visits them.
  */
 export interface CandidateTable {
@@ -514,10 +515,6 @@ export interface CandidateTable {
   layout: Uint16Array;
   fc: Uint8Array;
   brace: Uint8Array;
-  cost: Float64Array;
-  cents: Float64Array;
-  carbon: Float64Array;
-  carbonUnits: Float64Array;
   /** candidates sorted by cents, then index */
   order: Uint32Array;
   /**
@@ -572,10 +569,6 @@ export function buildCandidateTable(
     layout: arrayOf("layout", n, (m) => new Uint16Array(m), reuse),
     fc: arrayOf("fc", n, (m) => new Uint8Array(m), reuse),
     brace: arrayOf("brace", n, (m) => new Uint8Array(m), reuse),
-    cost: arrayOf("cost", n, (m) => new Float64Array(m), reuse),
-    cents: arrayOf("cents", n, (m) => new Float64Array(m), reuse),
-    carbon: arrayOf("carbon", n, (m) => new Float64Array(m), reuse),
-    carbonUnits: arrayOf("carbonUnits", n, (m) => new Float64Array(m), reuse),
     order: arrayOf("order", n, (m) => new Uint32Array(m), reuse),
     visit: arrayOf("visit", 4 * n, (m) => new Float64Array(m), reuse),
   };
@@ -609,10 +602,6 @@ export function buildCandidateTable(
           t.brace[k] = bi;
           const cents = toCents(cost);
           const carbonUnits = toCarbonUnits(carbon);
-          t.cost[k] = cost;
-          t.cents[k] = cents;
-          t.carbon[k] = carbon;
-          t.carbonUnits[k] = carbonUnits;
           if (cents > maxCents) maxCents = cents;
           recs[4 * k] = cents;
           recs[4 * k + 1] = carbonUnits;
@@ -635,6 +624,21 @@ export function buildCandidateTable(
   }
   t.visit = sorted;
   return t;
+}
+
+/**
+ * Cost ($) and carbon (kgCO2e) of candidate i, with the same arithmetic as the table's cents
+ * and carbon units (recomputed for the few candidates reported, instead of stored for all).
+ */
+export function candidateCostOf(problem: SearchProblem, t: CandidateTable, i: number): { cost: number; carbon: number } {
+  const fam = t.families[t.family[i] as number] as Family;
+  const li = t.layout[i] as number;
+  const fi = t.fc[i] as number;
+  const n = problem.braceLevels[t.brace[i] as number] as number;
+  const q = quantitiesOf(problem, fam, li, fi);
+  const base = costOf(problem, q, fi, 0);
+  // computeCost adds the brace line last, so the total with n braces is total₀ + n·price
+  return { cost: n > 0 ? base + n * problem.prices.brace : base, carbon: carbonOf(problem, q, fi) };
 }
 
 /** The contract id of candidate i. */

@@ -20,9 +20,11 @@ import { proveUnstable, steelInertiaOf } from "../../optimizer/prove-unstable";
 import { parseOptimizeRequest } from "../../lib/validation/optimize-request";
 import { formatCandidateId, parseCandidateId } from "../../optimizer/candidate-id";
 import { sortVisitRecords } from "../../optimizer/sort-visit-records";
+import { toCarbonUnits, toCents } from "../../optimizer/pareto-front";
 import {
   buildCandidateTable,
   buildSearchProblem,
+  candidateCostOf,
   candidateIdOf,
   carbonOf,
   costOf,
@@ -114,9 +116,9 @@ describe("quantities, cost, carbon and φPn,max = the engine's, bit for bit", ()
       expect(mine.steelLb).toBe(q.steelLb);
       expect(mine.formFt2).toBe(q.formFt2);
       const cost = computeCost(q, fc, n, problem.prices).total;
-      expect(table.cost[i]).toBe(cost);
+      expect(candidateCostOf(problem, table, i).cost).toBe(cost);
       expect(costOf(problem, mine, fi, n)).toBe(cost);
-      expect(table.carbon[i]).toBe(computeCarbon(q, fc, problem.carbon).total);
+      expect(candidateCostOf(problem, table, i).carbon).toBe(computeCarbon(q, fc, problem.carbon).total);
       expect(carbonOf(problem, mine, fi)).toBe(computeCarbon(q, fc, problem.carbon).total);
       expect(phiPnMaxOf(fam, li, fc)).toBe(sec.phiPnMax);
     }
@@ -186,12 +188,13 @@ describe("dealing the space to the parts of a parallel search", () => {
   it("visits candidates by cents, ties by index, as a comparison sort would", () => {
     const p = problemOf({ b: [12, 24, 4], h: [12, 24, 4], D: [16, 24, 4] });
     const t = buildCandidateTable(p);
-    const expected = Array.from({ length: t.n }, (_, i) => i).sort((a, b) => (t.cents[a] as number) - (t.cents[b] as number) || a - b);
+    const cents = Array.from({ length: t.n }, (_, i) => toCents(candidateCostOf(p, t, i).cost));
+    const expected = Array.from({ length: t.n }, (_, i) => i).sort((a, b) => (cents[a] as number) - (cents[b] as number) || a - b);
     expect(Array.from(t.order)).toEqual(expected);
     for (let pos = 0; pos < t.n; pos++) {
       const i = t.order[pos] as number;
-      expect(t.visit[4 * pos]).toBe(t.cents[i]);
-      expect(t.visit[4 * pos + 1]).toBe(t.carbonUnits[i]);
+      expect(t.visit[4 * pos]).toBe(cents[i]);
+      expect(t.visit[4 * pos + 1]).toBe(toCarbonUnits(candidateCostOf(p, t, i).carbon));
     }
   });
 });
