@@ -340,8 +340,9 @@ export function enumerateFamilies(problem: SearchProblem, part: { k: number; K: 
           for (const fh of faceH) {
             const count = 2 * fb.n + 2 * (fh.n - 2);
             if (count > maxCount) break;
-            if (!layoutFits(problem, "rect", b.v, h.v, 0, bar.db, bar.area, count, Infinity, "tied")) continue;
+            // dealt by the place in the pairing (valid or not): each part tests only its own
             if (!mine(++li)) continue;
+            if (!layoutFits(problem, "rect", b.v, h.v, 0, bar.db, bar.area, count, Infinity, "tied")) continue;
             layouts.push([fb.n, fh.n]);
             counts.push(count);
             crossTies.push([fb.need, fh.need]);
@@ -368,11 +369,11 @@ export function enumerateFamilies(problem: SearchProblem, part: { k: number; K: 
           const maxCount = Math.floor((cap * Ag) / bar.area) + 2;
           let li = -1;
           for (let n = confinement === "spiral" ? 6 : 4; n <= maxCount; n++) {
+            if (!mine(++li)) continue;
             // adjacent bars: the first on +y, the next at 2π/n (as the engine places them)
             const t = (2 * Math.PI) / n;
             const minClear = Math.hypot(0 - R * Math.sin(t), R * Math.cos(0) - R * Math.cos(t)) - bar.db;
             if (!layoutFits(problem, "circle", 0, 0, D.v, bar.db, bar.area, n, minClear, confinement)) continue;
-            if (!mine(++li)) continue;
             layouts.push([n, 0]);
             counts.push(n);
           }
