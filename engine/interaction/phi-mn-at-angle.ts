@@ -80,8 +80,7 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   st.degenerate = false;
   st.lastAlpha = Number.NaN;
   st.mScale = 1e-12 * k.P0 * Math.max(k.section.b, k.section.h);
-  // |Δθ| ≤ 1e-11 rad, and c solved to 1e-11 P0 at every step: tight enough that the
-  // result does not depend on the warm-start state left by earlier calls (beyond ~1e-11)
+  // |Δθ| ≤ 1e-11 rad, and c solved to 1e-11 P0 at every step
   const tol = 1e-11;
   // first guess: the elastic neutral axis of a moment at θ has tan α = tan θ · Ix/Iy
   let a = Math.atan2(k.elasticTanRatio * Math.sin(theta), Math.cos(theta));
