@@ -506,8 +506,7 @@ export function phiPnMaxOf(fam: Family, layoutIndex: number, fc: number): number
 /**
  * The whole candidate list: one entry per (family, layout, f'c, brace level), in compact
  * arrays; cost and carbon in cents and 0.01 kgCO2e ride in the visit records (exact values
- * of any one candidate: candidateCostOf). `order` lists candidates by cost (cents), then index: the order
- * the search visits them.
+ * of any one candidate: candidateCostOf).
  */
 export interface CandidateTable {
   families: Family[];
@@ -516,15 +515,20 @@ export interface CandidateTable {
   layout: Uint16Array;
   fc: Uint8Array;
   brace: Uint8Array;
-  /** candidates sorted by cents, then index */
-  order: Uint32Array;
   /**
-   * What the sweep reads for every candidate, in visiting order (4 numbers per position, one
-   * cache line instead of six arrays read at random): cents, carbon units, the axial lower
-   * bound of the utilization in 1e-4 units (Infinity when some Pu exceeds φPn,max), region.
+   * What the sweep reads, in visiting order (cents, then index): 4 unsigned 32-bit integers
+   * per position — cents, carbon units, the axial lower bound of the utilization in 1e-4
+   * units (AXIAL_FAIL when some Pu exceeds φPn,max), and index × 4 + region. 16 bytes a
+   * candidate, read in one stream (memory traffic, not arithmetic, limits two threads here).
    */
-  visit: Float64Array;
+  visit: Uint32Array;
 }
+
+/** Lower-bound slot of a candidate some load case fails by Pu > φPn,max (Table 22.4.2.1). */
+export const AXIAL_FAIL = 0xffffffff;
+
+/** Largest cents or carbon units a visit record holds ($42 million, 42 900 t CO2e per column). */
+const MAX_UNITS = 0xfffffffe;
 
 /** Region index of a family in `visit` (0 rect, 1 tied circle, 2 spiral circle). */
 export function regionIndexOf(fam: Family): number {
@@ -563,6 +567,8 @@ export function buildCandidateTable(
     const fcOk = fam.confinementOk.filter(Boolean).length;
     n += fam.layouts.length * fcOk * problem.braceLevels.length;
   }
+  // the visit record's tag holds index × 4 + region in 32 bits
+  if (n >= 2 ** 30) throw new RangeError(`the space holds ${n} candidates; the search ranks at most 2^30 at once`);
   const t: CandidateTable = {
     families,
     n,
@@ -570,10 +576,9 @@ export function buildCandidateTable(
     layout: arrayOf("layout", n, (m) => new Uint16Array(m), reuse),
     fc: arrayOf("fc", n, (m) => new Uint8Array(m), reuse),
     brace: arrayOf("brace", n, (m) => new Uint8Array(m), reuse),
-    order: arrayOf("order", n, (m) => new Uint32Array(m), reuse),
-    visit: arrayOf("visit", 4 * n, (m) => new Float64Array(m), reuse),
+    visit: arrayOf("visit", 4 * n, (m) => new Uint32Array(m), reuse),
   };
-  // visit records in candidate order: cents, carbon units, lower bound, index × 4 + region
+  // visit records in index order: cents, carbon units, lower bound, index × 4 + region
   const recs = t.visit;
   let maxCents = 0;
   const maxPu = problem.loads.reduce((m, l) => Math.max(m, l.Pu), -Infinity);
@@ -591,7 +596,7 @@ export function buildCandidateTable(
         const carbon = carbonOf(problem, q, fi);
         // the engine fails a case with Pu > φPn,max first; a case's utilization is ≥ Pu/φPn,max
         const phiPnMax = phiPnMaxOf(fam, li, (problem.fcs[fi] as Valued).v);
-        const lbUnits = maxPu <= phiPnMax ? toUtilUnits(maxPu / phiPnMax) : Number.POSITIVE_INFINITY;
+        const lbUnits = maxPu <= phiPnMax ? toUtilUnits(maxPu / phiPnMax) : AXIAL_FAIL;
         // computeCost adds the brace line last, so the total with n braces is total₀ + n·price
         const base = costOf(problem, q, fi, 0);
         for (let bi = 0; bi < problem.braceLevels.length; bi++) {
@@ -604,6 +609,9 @@ export function buildCandidateTable(
           const cents = toCents(cost);
           const carbonUnits = toCarbonUnits(carbon);
           if (cents > maxCents) maxCents = cents;
+          if (!(cents >= 0 && cents <= MAX_UNITS && carbonUnits >= 0 && carbonUnits <= MAX_UNITS)) {
+            throw new RangeError(`a candidate's cost ($${cost}) or carbon (${carbon} kgCO2e) is outside what the search can rank (0 … 42 million)`);
+          }
           recs[4 * k] = cents;
           recs[4 * k + 1] = carbonUnits;
           recs[4 * k + 2] = lbUnits;
@@ -613,17 +621,9 @@ export function buildCandidateTable(
       }
     }
   }
-  // Visit order: by cents, ties by index (deterministic), then the region alone in slot 3.
-  // Cents are whole and non-negative (prices ≥ 0); a space costing over $42 million per
-  // column would need a comparison sort instead, and is refused by the radix sort.
-  const sorted = sortVisitRecords(recs, arrayOf("visitSpare", 4 * n, (m) => new Float64Array(m), reuse), n, maxCents);
-  for (let pos = 0; pos < n; pos++) {
-    const tag = sorted[4 * pos + 3] as number;
-    const region = tag % 4;
-    t.order[pos] = (tag - region) / 4;
-    sorted[4 * pos + 3] = region;
-  }
-  t.visit = sorted;
+  // Visit order: by cents, ties by index (the radix sort is stable and the records were
+  // written in index order).
+  t.visit = sortVisitRecords(recs, arrayOf("visitSpare", 4 * n, (m) => new Uint32Array(m), reuse), n, maxCents);
   return t;
 }
 

@@ -30,7 +30,7 @@ import { caseUtilization, prepareMember, resolveSection } from "../engine";
 import type { LoadCase, MemberInput } from "../engine/types";
 import { Staircase, toUtilUnits } from "./pareto-front";
 import { proveUnstable, steelInertiaOf } from "./prove-unstable";
-import { sectionInputOf, type CandidateTable, type Family, type SearchProblem } from "./search-space";
+import { AXIAL_FAIL, sectionInputOf, type CandidateTable, type Family, type SearchProblem } from "./search-space";
 
 /** Pass tolerance of the engine's check (utilization ≤ 1 + 1e-9 passes). */
 const PASS_LIMIT = 1 + 1e-9;
@@ -89,7 +89,7 @@ function newTally(nCases: number): RegionTally {
 }
 
 export interface SweepOptions {
-  /** positions [from, to) in table.order to visit */
+  /** positions [from, to) of table.visit to visit */
   from: number;
   to: number;
   exchange: BoundExchange;
@@ -126,7 +126,7 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
   /** Skip test on the points known now; counts the skip. */
   const dominated = (pos: number): boolean => {
     if (carb.dominatesAll(visit[4 * pos] as number, visit[4 * pos + 1] as number) && util.dominatesAll(visit[4 * pos] as number, visit[4 * pos + 2] as number)) {
-      (regionTally[visit[4 * pos + 3] as number] as RegionTally).dominated++;
+      (regionTally[(visit[4 * pos + 3] as number) & 3] as RegionTally).dominated++;
       return true;
     }
     return false;
@@ -136,7 +136,7 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
   const evaluateAt = (pos: number): void => {
     const cents = visit[4 * pos] as number;
     const cu = visit[4 * pos + 1] as number;
-    const i = table.order[pos] as number;
+    const i = (visit[4 * pos + 3] as number) >>> 2;
     const famIndex = table.family[i] as number;
     const fam = table.families[famIndex] as Family;
     const tally = famTally[famIndex] as RegionTally;
@@ -206,8 +206,8 @@ export function sweepSlice(problem: SearchProblem, table: CandidateTable, opts: 
     }
     if (!exhaustive) {
       // Table 22.4.2.1: the engine fails a case whose Pu exceeds φPn,max before anything else
-      if ((visit[4 * pos + 2] as number) === Number.POSITIVE_INFINITY) {
-        (regionTally[visit[4 * pos + 3] as number] as RegionTally).axialFails++;
+      if ((visit[4 * pos + 2] as number) === AXIAL_FAIL) {
+        (regionTally[(visit[4 * pos + 3] as number) & 3] as RegionTally).axialFails++;
         continue;
       }
       if (dominated(pos)) continue;
