@@ -8,15 +8,23 @@ const tensionOut = new Float64Array(4);
 const PX = [1, 0, -1, 0] as const;
 const PY = [0, 1, 0, -1] as const;
 
-/** Capacity in one uniaxial direction index (0 +x, 1 +y, 2 −x, 3 −y). @internal */
-export function capacityUni(k: Kernel, idx: 0 | 1 | 2 | 3, Pu: number): MomentCapacity {
+/** Result of the last uniaxial solve (module level: the number-only path allocates nothing). */
+const last = { phiMn: 0, Mn: 0, phi: 0, c: 0, epsT: 0 };
+
+/** Solve one uniaxial direction index (0 +x, 1 +y, 2 −x, 3 −y) into `last`. */
+function solveUni(k: Kernel, idx: 0 | 1 | 2 | 3, Pu: number): void {
   const px = PX[idx];
   const py = PY[idx];
   if (Pu <= -PHI_TENSION * k.Pnt) {
     // exactly the pure-tension strength: c = 0, every bar at −fy
     evaluate(k, uniScan(k, idx).dir, 0, tensionOut);
     const Mn = Math.max(0, (tensionOut[1] as number) * px + (tensionOut[2] as number) * py);
-    return { phiMn: PHI_TENSION * Mn, Mn, phi: PHI_TENSION, c: 0, epsT: tensionOut[3] as number };
+    last.phiMn = PHI_TENSION * Mn;
+    last.Mn = Mn;
+    last.phi = PHI_TENSION;
+    last.c = 0;
+    last.epsT = tensionOut[3] as number;
+    return;
   }
   solveScan(k, uniScan(k, idx), Pu, px, py, root);
   if (Number.isNaN(root.c)) {
@@ -26,7 +34,34 @@ export function capacityUni(k: Kernel, idx: 0 | 1 | 2 | 3, Pu: number): MomentCa
   }
   const Mn = Math.max(0, root.Mx * px + root.My * py);
   const phi = phiOf(root.epsT, k.epsTy, k.phiC);
-  return { phiMn: phi * Mn, Mn, phi, c: root.c, epsT: root.epsT };
+  last.phiMn = phi * Mn;
+  last.Mn = Mn;
+  last.phi = phi;
+  last.c = root.c;
+  last.epsT = root.epsT;
+}
+
+/** Capacity in one uniaxial direction index (0 +x, 1 +y, 2 −x, 3 −y). @internal */
+export function capacityUni(k: Kernel, idx: 0 | 1 | 2 | 3, Pu: number): MomentCapacity {
+  solveUni(k, idx, Pu);
+  return { phiMn: last.phiMn, Mn: last.Mn, phi: last.phi, c: last.c, epsT: last.epsT };
+}
+
+/**
+ * φMn about one axis at Pu as a number, the smaller of both senses for a section not
+ * symmetric about the axis — the value phiMnAt(...).phiMn gives, without building a result
+ * (the member check needs only the number, twice per load case). −1 when Pu is outside
+ * −0.9 Pnt … φPn,max. @internal
+ * @example phiMnValueAt(section, "x", 310) // kip-in
+ */
+export function phiMnValueAt(section: ResolvedSection, axis: Axis, Pu: number): number {
+  const k = kernelOf(section);
+  if (!axialInRange(k, Pu)) return -1;
+  solveUni(k, axis === "x" ? 0 : 1, Pu);
+  const a = last.phiMn;
+  if (axis === "x" ? k.symAboutX : k.symAboutY) return a;
+  solveUni(k, axis === "x" ? 2 : 3, Pu);
+  return last.phiMn < a ? last.phiMn : a;
 }
 
 /**

@@ -1,4 +1,5 @@
-import { circleCapacityAt, phiMnAt, phiMnAtAngle } from "../interaction";
+import { circleCapacityAt, phiMnAtAngle } from "../interaction";
+import { phiMnValueAt } from "../interaction/phi-mn-at";
 import { computeSegmentEndMoments, type SegmentEndMoments } from "../slenderness/compute-segment-end-moments";
 import {
   createMagnifierChain,
@@ -143,8 +144,7 @@ export function runAxis(
 export function capacityX(prep: PreparedMember, s: CaseScratch, Pu: number): number {
   if (prep.circle) return capacityCircle(prep, s, Pu);
   if (Number.isNaN(s.capX)) {
-    const c = phiMnAt(prep.section, "x", Pu);
-    s.capX = c === null ? -1 : c.phiMn;
+    s.capX = phiMnValueAt(prep.section, "x", Pu);
   }
   return s.capX;
 }
@@ -153,8 +153,7 @@ export function capacityX(prep: PreparedMember, s: CaseScratch, Pu: number): num
 export function capacityY(prep: PreparedMember, s: CaseScratch, Pu: number): number {
   if (prep.circle) return capacityCircle(prep, s, Pu);
   if (Number.isNaN(s.capY)) {
-    const c = phiMnAt(prep.section, "y", Pu);
-    s.capY = c === null ? -1 : c.phiMn;
+    s.capY = phiMnValueAt(prep.section, "y", Pu);
   }
   return s.capY;
 }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { resolveSection } from "@/engine/section";
 import { interactionDiagram, phiFactor, phiMnAt, sectionForcesAt } from "@/engine/interaction";
+import { phiMnValueAt } from "@/engine/interaction/phi-mn-at";
 import type { ResolvedSection, SectionInput } from "@/engine/types";
 
 const ES = 29000; // 20.2.2.2
@@ -223,6 +224,28 @@ function scanDiagram(section: ResolvedSection, axis: "x" | "y", Pu: number, sens
   }
   return best;
 }
+
+describe("phiMnValueAt (the member check's number-only φMn)", () => {
+  it("equals phiMnAt(...).phiMn bit for bit, both axes, symmetric and not, and is −1 out of range", () => {
+    const sym = resolveSection({
+      shape: "rect", b: 18, h: 26, fc: 6, fy: 60, confinement: "tied", cover: 1.5,
+      layout: { type: "perimeter", size: "#9", nb: 3, nh: 5 },
+    });
+    const unsym = resolveSection({
+      shape: "rect", b: 16, h: 22, fc: 5, fy: 60, confinement: "tied", cover: 1.5,
+      bars: [{ x: -5.6, y: 8.6, size: "#10" }, { x: 5.6, y: 8.6, size: "#10" }, { x: 5.6, y: -8.6, size: "#6" }, { x: -5.6, y: -8.6, size: "#6" }],
+    });
+    for (const sec of [sym, unsym]) {
+      for (const axis of ["x", "y"] as const) {
+        for (let Pu = -0.9 * sec.Pnt; Pu <= sec.phiPnMax; Pu += sec.phiPnMax / 37) {
+          expect(phiMnValueAt(sec, axis, Pu)).toBe(phiMnAt(sec, axis, Pu)?.phiMn);
+        }
+        expect(phiMnValueAt(sec, axis, sec.phiPnMax * 1.001)).toBe(-1);
+        expect(phiMnValueAt(sec, axis, -0.9 * sec.Pnt * 1.001)).toBe(-1);
+      }
+    }
+  });
+});
 
 describe("phiMnAt", () => {
   it("agrees with a dense diagram scan (2000 points) over the whole axial range", () => {
