@@ -16,6 +16,9 @@ import os from "node:os";
 import { carbon, prices, tenCases } from "./optimizer-scenario";
 import { closeOptimizerPools, getOptimizerPool, runSearchOnPool } from "../optimizer/optimizer-pool";
 import type { OptimizeResult } from "../optimizer/merge-results";
+import { validateRequest } from "../optimizer/run-search";
+import type { SearchTask, TaskResult } from "../optimizer/run-task";
+import { createSharedBounds } from "../optimizer/shared-bounds";
 // @ts-expect-error -- plain ESM build script without type declarations
 import { ensureWorkerBundle } from "./build-workers.mjs";
 
@@ -70,6 +73,24 @@ async function calibrate(): Promise<number> {
   return one / two;
 }
 
+/**
+ * How much slower the whole one-thread search runs when a second copy runs beside it on the
+ * other thread (caches, memory and the cores' shared resources): 2 / this is the ceiling for
+ * the 2-thread speed-up of this very workload here, however well it is split.
+ */
+async function contention(pool: ReturnType<typeof getOptimizerPool>, rounds: number): Promise<number> {
+  const req = validateRequest(request);
+  const task = (): SearchTask => ({ request: req, part: 0, parts: 1, exhaustive: false, shared: createSharedBounds() });
+  const inTask = (r: TaskResult) => r.timings.setup + r.timings.table + r.timings.sweep + r.timings.finish;
+  const ratios: number[] = [];
+  for (let i = 0; i < rounds; i++) {
+    const alone = inTask((await pool.run(task())) as TaskResult);
+    const both = (await Promise.all([pool.run(task()), pool.run(task())])) as TaskResult[];
+    ratios.push(Math.max(...both.map(inTask)) / alone);
+  }
+  return median(ratios);
+}
+
 async function main(): Promise<void> {
   const bundle = (await ensureWorkerBundle()) as string;
   console.log(`machine: ${os.availableParallelism()} cores, Node ${process.version}, load average ${os.loadavg().map((x) => x.toFixed(1)).join(" ")}; worker ${bundle}`);
@@ -107,6 +128,8 @@ async function main(): Promise<void> {
   console.log(`  case checks            ${String(r1.counters.caseChecks).padEnd(15)} ${r2.counters.caseChecks}`);
   console.log(`  passing evaluated      ${String(r1.stats.passing).padEnd(15)} ${r2.stats.passing}`);
   console.log(`  speed-up 1 → 2 threads ${(m1 / m2).toFixed(2)}×`);
+  const slow = await contention(pool, runs);
+  console.log(`  contention: the whole 1-thread search runs ${slow.toFixed(2)}× slower beside a copy of itself → ceiling ${(2 / slow).toFixed(2)}× for 2 threads`);
   console.log(`  front ${r1.front.length} members, carbon front ${r1.carbonFront.length}, best ${r1.best?.id} $${r1.best?.cost} u = ${r1.best?.utilization}`);
 
   if (exhaustive) {
