@@ -79,6 +79,8 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   st.guess = 0;
   st.degenerate = false;
   st.lastAlpha = Number.NaN;
+  st.prevAlpha = Number.NaN;
+  st.prevC = 0;
   st.mScale = 1e-12 * k.P0 * Math.max(k.section.b, k.section.h);
   // |Δθ| ≤ 1e-11 rad, and c solved to 1e-11 P0 at every step
   const tol = 1e-11;
@@ -89,7 +91,12 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   let found = Math.abs(fa) <= tol || st.degenerate;
   if (!found) {
     // secant steps, kept inside a bracket once one is known (bisection when a step
-    // leaves it); the first step uses the slope dθ/dα seen last time on this section
+    // leaves it); the first step uses the elastic section's slope dθ/dα
+    // first slope: dθ/dα of the elastic section, tan θ = tan α / r → r / (r² cos²α + sin²α)
+    const r = k.elasticTanRatio;
+    const ca = Math.cos(a);
+    const sa = Math.sin(a);
+    k.alphaSlope = r / (r * r * ca * ca + sa * sa);
     let b = a + clampStep(-fa / k.alphaSlope);
     let fb = errAt(b);
     let lo = Number.NaN;
@@ -279,14 +286,26 @@ function clampStep(step: number): number {
 }
 
 /** State of the current angle iteration (module level: no closure per call). */
-const st = { k: null as Kernel | null, Pu: 0, theta: 0, guess: 0, degenerate: false, mScale: 0, lastAlpha: Number.NaN };
+const st = {
+  k: null as Kernel | null, Pu: 0, theta: 0, guess: 0, degenerate: false, mScale: 0, lastAlpha: Number.NaN,
+  /** the root c one step before (prevAlpha, prevC): extrapolating c in α halves the c error */
+  prevAlpha: Number.NaN, prevC: 0,
+};
 
 /** Angle between the nominal moment vector at neutral-axis angle α and the target θ. */
 function errAt(alpha: number): number {
   const k = st.k as Kernel;
   const dir = k.scratchDir;
   setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
-  solveSingle(k, dir, st.Pu, st.guess, root);
+  let guess = st.guess;
+  if (guess > 0 && st.prevC > 0 && Number.isFinite(st.prevAlpha) && st.prevAlpha !== st.lastAlpha) {
+    // c moves smoothly with α: extrapolate along the last two solutions of this call
+    const g = guess + ((alpha - st.lastAlpha) * (guess - st.prevC)) / (st.lastAlpha - st.prevAlpha);
+    if (g > 0 && g < dir.cP0) guess = g;
+  }
+  solveSingle(k, dir, st.Pu, guess, root);
+  st.prevAlpha = st.lastAlpha;
+  st.prevC = st.guess;
   st.guess = root.c;
   st.lastAlpha = alpha;
   if (Math.hypot(root.Mx, root.My) <= st.mScale) {
