@@ -1,5 +1,5 @@
 import type { MomentCapacity, ResolvedSection } from "../types";
-import { phiMnAt } from "./phi-mn-at";
+import { phiMnAt, phiMnValueAt } from "./phi-mn-at";
 import { halfPitchOf, kernelOf } from "./section-kernel";
 
 /**
@@ -22,4 +22,17 @@ export function circleCapacityAt(section: ResolvedSection, Pu: number): MomentCa
   const turned = phiMnAt(halfPitchOf(k), "x", Pu);
   if (turned === null) return asGiven;
   return turned.phiMn < asGiven.phiMn ? turned : asGiven;
+}
+
+/**
+ * circleCapacityAt(...).phiMn as a number, without building results (the member check
+ * needs the number once per load case); −1 when Pu is outside −0.9 Pnt … φPn,max. @internal
+ * @example circleCapacityValueAt(section, 300) // kip-in
+ */
+export function circleCapacityValueAt(section: ResolvedSection, Pu: number): number {
+  if (section.shape !== "circle") throw new RangeError("circleCapacityValueAt needs a circular section");
+  const asGiven = phiMnValueAt(section, "x", Pu);
+  if (asGiven < 0) return -1;
+  const turned = phiMnValueAt(halfPitchOf(kernelOf(section)), "x", Pu);
+  return turned >= 0 && turned < asGiven ? turned : asGiven;
 }

@@ -1,4 +1,5 @@
-import { circleCapacityAt, phiMnAtAngle } from "../interaction";
+import { phiMnAtAngle } from "../interaction";
+import { circleCapacityValueAt } from "../interaction/circle-capacity-at";
 import { phiMnValueAt } from "../interaction/phi-mn-at";
 import { computeSegmentEndMoments, type SegmentEndMoments } from "../slenderness/compute-segment-end-moments";
 import {
@@ -139,7 +140,7 @@ export function runAxis(
 
 /**
  * φMn about x at Pu (cached in the scratch), kip-in; −1 when Pu is outside the axial range.
- * Circles use circleCapacityAt (§7.5). @example capacityX(prep, s, 300) // 4942
+ * Circles use circleCapacityValueAt (§7.5). @example capacityX(prep, s, 300) // 4942
  */
 export function capacityX(prep: PreparedMember, s: CaseScratch, Pu: number): number {
   if (prep.circle) return capacityCircle(prep, s, Pu);
@@ -159,10 +160,7 @@ export function capacityY(prep: PreparedMember, s: CaseScratch, Pu: number): num
 }
 
 function capacityCircle(prep: PreparedMember, s: CaseScratch, Pu: number): number {
-  if (Number.isNaN(s.capCircle)) {
-    const c = circleCapacityAt(prep.section, Pu);
-    s.capCircle = c === null ? -1 : c.phiMn;
-  }
+  if (Number.isNaN(s.capCircle)) s.capCircle = circleCapacityValueAt(prep.section, Pu);
   return s.capCircle;
 }
 

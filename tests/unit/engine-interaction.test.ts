@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { resolveSection } from "@/engine/section";
 import { interactionDiagram, phiFactor, phiMnAt, sectionForcesAt } from "@/engine/interaction";
 import { phiMnValueAt } from "@/engine/interaction/phi-mn-at";
+import { circleCapacityAt, circleCapacityValueAt } from "@/engine/interaction/circle-capacity-at";
 import type { ResolvedSection, SectionInput } from "@/engine/types";
 
 const ES = 29000; // 20.2.2.2
@@ -243,6 +244,18 @@ describe("phiMnValueAt (the member check's number-only φMn)", () => {
         expect(phiMnValueAt(sec, axis, sec.phiPnMax * 1.001)).toBe(-1);
         expect(phiMnValueAt(sec, axis, -0.9 * sec.Pnt * 1.001)).toBe(-1);
       }
+    }
+  });
+});
+
+describe("circleCapacityValueAt (the member check's number-only circle capacity)", () => {
+  it("equals circleCapacityAt(...).phiMn bit for bit and is −1 out of range", () => {
+    for (const n of [6, 7, 10]) {
+      const sec = resolveSection({ shape: "circle", D: 22, fc: 5, fy: 60, confinement: "tied", cover: 1.5, layout: { type: "circle", size: "#8", n } });
+      for (let Pu = -0.9 * sec.Pnt; Pu <= sec.phiPnMax; Pu += sec.phiPnMax / 29) {
+        expect(circleCapacityValueAt(sec, Pu)).toBe(circleCapacityAt(sec, Pu)?.phiMn);
+      }
+      expect(circleCapacityValueAt(sec, sec.phiPnMax * 1.001)).toBe(-1);
     }
   });
 });
