@@ -697,6 +697,7 @@ export function solveNear(
   near.res = res;
   near.best = Number.POSITIVE_INFINITY;
   res.c = Number.NaN;
+  foundRoots.n = 0;
   considerRoot(known);
   let p = 0;
   while (p < m && (cj[p] as number) < known) p++;
@@ -759,7 +760,24 @@ function stepRight(j: number): number {
   return v - (stepPhi.buf[j] as number) * (near.k as Kernel).k85 * (jumpA.buf[j] as number);
 }
 
+/**
+ * Every root the last solveNear / solveMulti call found (depths c, in), so that a caller can
+ * follow each root's branch (phi-mn-at-angle.ts: several angles may satisfy the direction).
+ * @internal
+ */
+export const foundRoots = { c: new Float64Array(16), n: 0 };
+
+function recordRoot(c: number): void {
+  if (foundRoots.n === foundRoots.c.length) {
+    const grown = new Float64Array(foundRoots.c.length * 2);
+    grown.set(foundRoots.c);
+    foundRoots.c = grown;
+  }
+  foundRoots.c[foundRoots.n++] = c;
+}
+
 function considerRoot(c: number): void {
+  recordRoot(c);
   const k = near.k as Kernel;
   const res = near.res as RootResult;
   evaluate(k, near.dir as Direction, c, localOut);
@@ -808,6 +826,7 @@ export function solveMulti(
   }
   let best = Number.POSITIVE_INFINITY;
   res.c = Number.NaN;
+  foundRoots.n = 0;
   let cPrev = 0;
   let fPrev = -PHI_TENSION * k.Pnt - Pu;
   for (let j = 0; j <= m; j++) {
@@ -834,6 +853,7 @@ export function solveMulti(
       lastEval.c = Number.NaN;
       // a root already known to lie in this interval (from the angle iteration) is reused
       const c = known > cPrev && known < cLeft ? known : solveC(k, dir, Pu, cPrev, fPrev, cLeft, fLeft);
+      recordRoot(c);
       if (c === lastEval.c) copyForces(evalOut, multiOut);
       else evaluate(k, dir, c, multiOut);
       const mProj = phiOf(multiOut[3] as number, k.epsTy, k.phiC) * ((multiOut[1] as number) * px + (multiOut[2] as number) * py);
