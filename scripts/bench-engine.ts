@@ -87,6 +87,25 @@ function bench(name: string, s: ResolvedSection): void {
   row(`${name}: caseUtilization × 10, biaxial (no output)`, time(() => { let m = 0; for (const l of bi) m = Math.max(m, caseUtilization(prep, l)); return m; }, 100));
 }
 
+/**
+ * A fixed arithmetic loop (the shape of the section kernel's bar loop), ns per pass: how fast
+ * this shared machine runs right now. Figures above scale with it; compare runs by it.
+ */
+function machineSpeed(): number {
+  const d = [1.1, 2.3, 3.7, 5.2, 7.9, 9.4, 11.6, 13.1, 15.8, 17.2, 19.9, 21.4];
+  const t = time((i) => {
+    const inv = 1 / (5 + (i % 7) * 0.1);
+    let p = 0;
+    for (let j = 0; j < 12; j++) p += Math.max(-60, Math.min(60, 87 * (1 - (d[j] as number) * inv))) * (d[j] as number);
+    return p;
+  }, 20000);
+  return t.min * 1000;
+}
+
+const os = await import("node:os");
+const speedBefore = machineSpeed();
 console.log(`engine benchmark — node ${process.version}, 31 batches per figure (median and minimum of the batch means)`);
+console.log(`machine now: reference loop ${speedBefore.toFixed(1)} ns (about 35 ns when this machine is quiet), load average ${os.loadavg().map((x) => x.toFixed(1)).join(" ")}`);
 bench("rect 20×24, 12 #9", rect);
 bench("circle D24, 10 #8", circ);
+console.log(`machine after: reference loop ${machineSpeed().toFixed(1)} ns`);
