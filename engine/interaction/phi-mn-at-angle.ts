@@ -2,7 +2,7 @@ import type { MomentCapacity, ResolvedSection } from "../types";
 import { findRoot } from "./find-root";
 import {
   PHI_TENSION, axialInRange, evaluate, foundRoots, kernelOf, newRoot, phiPnAt, setDirection, solveC, solveMulti, solveNear, solveSingle,
-  type Kernel,
+  type Direction, type Kernel,
 } from "./section-kernel";
 import { snapUnit } from "./section-forces-at";
 import { phiOf } from "./phi-factor";
@@ -42,8 +42,8 @@ function wrapAngle(a: number): number {
  * unsymmetric section under high axial load) has zero capacity.
  *
  * The result depends on (section, Pu, θ) only: every call starts from the same state (the
- * elastic guess tan α = tan θ · Igx/Igy, unit slopes), so it does not matter which cases
- * ran before on the same section. Warm starts are used only within one call.
+ * elastic guess tan α = tan θ · Igx/Igy and its slope dθ/dα), so it does not matter which
+ * cases ran before on the same section. Warm starts are used only within one call.
  *
  * For a symmetric section θ = 0 and θ = π/2 give exactly phiMnAt about x and about y.
  * Circles: see circleCapacityAt for the project's orientation rule (§7.5).
@@ -71,8 +71,8 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   }
   // start from the same state on every call: where several roots exist, which branch
   // the iteration meets first must not depend on earlier calls
-  k.alphaSlope = 1;
-  k.slope = 0;
+  st.alphaSlope = 1;
+  st.slope = 0;
   st.k = k;
   st.Pu = Pu;
   st.theta = theta;
@@ -91,13 +91,13 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
   let found = Math.abs(fa) <= tol || st.degenerate;
   if (!found) {
     // secant steps, kept inside a bracket once one is known (bisection when a step
-    // leaves it); the first step uses the elastic section's slope dθ/dα
-    // first slope: dθ/dα of the elastic section, tan θ = tan α / r → r / (r² cos²α + sin²α)
+    // leaves it); the first step uses the elastic section's slope dθ/dα: with
+    // tan θ = tan α / r, dθ/dα = r / (r² cos²α + sin²α)
     const r = k.elasticTanRatio;
     const ca = Math.cos(a);
     const sa = Math.sin(a);
-    k.alphaSlope = r / (r * r * ca * ca + sa * sa);
-    let b = a + clampStep(-fa / k.alphaSlope);
+    st.alphaSlope = r / (r * r * ca * ca + sa * sa);
+    let b = a + clampStep(-fa / st.alphaSlope);
     let fb = errAt(b);
     let lo = Number.NaN;
     let flo = 0;
@@ -127,7 +127,7 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
       // error (a direction the contour does not reach), not a root
       if (!Number.isNaN(lo) && hi - lo < 1e-12) break;
       const slope = (fb - fa) / (b - a);
-      if (slope > 0.05 && slope < 20) k.alphaSlope = slope;
+      if (slope > 0.05 && slope < 20) st.alphaSlope = slope;
       let next = b - fb / slope;
       if (!Number.isNaN(lo)) {
         if (!(next > lo && next < hi)) next = flo !== fhi ? lo - (flo * (hi - lo)) / (fhi - flo) : (lo + hi) / 2;
@@ -149,8 +149,7 @@ export function phiMnAtAngle(section: ResolvedSection, Pu: number, thetaRad: num
  * Final step at a converged α: every root in c, the smallest capacity along θ governs (§7.6).
  * A displaced-concrete step can give several roots at α; each lies on its own branch, whose
  * moment points slightly off θ here and reaches θ at a nearby angle, with a capacity that
- * may be smaller than the one the iteration followed (seen: 0.2 % smaller, 3 directions in
- * 600 random ones). Each other branch is therefore followed in α on its own (between the
+ * may be smaller than the one the iteration followed (seen: 0.1 % smaller). Each other branch is therefore followed in α on its own (between the
  * same two steps) until it points along θ, and the smallest of all governs.
  */
 function capacityAtAlpha(k: Kernel, Pu: number, theta: number, alpha: number, known: number): BiaxialCapacity {
@@ -158,7 +157,7 @@ function capacityAtAlpha(k: Kernel, Pu: number, theta: number, alpha: number, kn
   setDirection(k, snapUnit(Math.sin(alpha)), snapUnit(Math.cos(alpha)), dir);
   if (Number.isNaN(known)) solveMulti(k, dir, Pu, Math.cos(theta), Math.sin(theta), root);
   else solveNear(k, dir, Pu, Math.cos(theta), Math.sin(theta), root, known);
-  if (Number.isNaN(root.c)) solveSingle(k, dir, Pu, 0, root);
+  if (Number.isNaN(root.c)) solveSingle(k, dir, Pu, 0, root, st);
   const main = capacityOf(k, alpha);
   let best = main;
   let followedC = main.c;
@@ -190,8 +189,9 @@ const PROBES = [0.003, -0.003, 0.01, -0.01];
 /**
  * The pieces just across the displaced-concrete steps below and above the followed root c0
  * at α0 may hold no root at α0 yet one a little way off, whose branch reaches θ with a
- * smaller capacity (the root jumps across the step as α changes; seen: 0.17 % smaller).
- * When a step lies within a tenth of the block-full depth of c0, its far piece is probed at
+ * smaller capacity (the root jumps across the step as α changes; seen: up to 0.2 % smaller,
+ * 3 directions in 600 random ones). When a step lies within 5 % of the block-full depth of
+ * c0, its far piece is probed at
  * a few nearby angles and, where it holds a root, followed to θ. Returns the smallest such
  * capacity, or null.
  */
@@ -199,16 +199,10 @@ function acrossNearbySteps(k: Kernel, Pu: number, theta: number, alpha0: number,
   const dir = k.scratchDir;
   setDirection(k, snapUnit(Math.sin(alpha0)), snapUnit(Math.cos(alpha0)), dir);
   const near = 0.05 * dir.cFull;
-  // the nearest step on each side, and the step beyond it (the far piece's other end)
-  let below = -1;
-  let above = -1;
-  for (let i = 0; i < k.n; i++) {
-    const di = dir.d[i] as number;
-    if (!(di > 0 && di < dir.depth)) continue;
-    const cj = di / k.beta1;
-    if (cj < c0 && (below < 0 || cj > (dir.d[below] as number) / k.beta1)) below = i;
-    if (cj > c0 && (above < 0 || cj < (dir.d[above] as number) / k.beta1)) above = i;
-  }
+  // the nearest step on each side (the far piece runs from it to the next step beyond)
+  stepsAround(k, dir, c0);
+  const below = around.below;
+  const above = around.above;
   let best: BiaxialCapacity | null = null;
   for (const step of [below, above]) {
     if (step < 0) continue;
@@ -220,13 +214,9 @@ function acrossNearbySteps(k: Kernel, Pu: number, theta: number, alpha0: number,
       setDirection(k, snapUnit(Math.sin(a1)), snapUnit(Math.cos(a1)), dir);
       const cs = (dir.d[step] as number) / k.beta1;
       // the far piece: from this step to the next step beyond it (or the end of the range)
-      let cEnd = side > 0 ? dir.cP0 : 0;
-      for (let i = 0; i < k.n; i++) {
-        const di = dir.d[i] as number;
-        if (i === step || !(di > 0 && di < dir.depth)) continue;
-        const cj = di / k.beta1;
-        if (side > 0 ? cj > cs && cj < cEnd : cj < cs && cj > cEnd) cEnd = cj;
-      }
+      stepsAround(k, dir, cs);
+      const beyond = side > 0 ? around.above : around.below;
+      const cEnd = beyond >= 0 ? (dir.d[beyond] as number) / k.beta1 : side > 0 ? dir.cP0 : 0;
       const lo = Math.min(cs, cEnd);
       const hi = Math.max(cs, cEnd);
       const fLo = phiPnAt(k, dir, lo > 0 ? lo * (1 + 1e-10) : 0) - Pu;
@@ -247,6 +237,34 @@ function capacityOf(k: Kernel, alpha: number): BiaxialCapacity {
   const Mn = Math.hypot(root.Mx, root.My);
   const phi = phiOf(root.epsT, k.epsTy, k.phiC);
   return { phiMn: phi * Mn, Mn, phi, c: root.c, epsT: root.epsT, alpha: wrapAngle(alpha) };
+}
+
+/** The bars of the nearest displaced-concrete steps below and above a depth (−1: none); see stepsAround. */
+const around = { below: -1, above: -1 };
+
+/**
+ * Fill `around` with the bars whose steps c = d/β1 (bars inside the section depth) lie
+ * nearest strictly below and strictly above c in direction `dir`.
+ */
+function stepsAround(k: Kernel, dir: Direction, c: number): void {
+  let below = -1;
+  let above = -1;
+  let cBelow = 0;
+  let cAbove = Number.POSITIVE_INFINITY;
+  for (let i = 0; i < k.n; i++) {
+    const di = dir.d[i] as number;
+    if (!(di > 0 && di < dir.depth)) continue;
+    const cj = di / k.beta1;
+    if (cj < c && cj > cBelow) {
+      cBelow = cj;
+      below = i;
+    } else if (cj > c && cj < cAbove) {
+      cAbove = cj;
+      above = i;
+    }
+  }
+  around.below = below;
+  around.above = above;
 }
 
 /** Branch of roots between two fixed displaced-concrete steps (bar indices, −1 = none). */
@@ -276,30 +294,15 @@ function branchErr(alpha: number): number {
 function trackBranch(k: Kernel, Pu: number, theta: number, alpha0: number, c0: number): BiaxialCapacity | null {
   const dir = k.scratchDir;
   setDirection(k, snapUnit(Math.sin(alpha0)), snapUnit(Math.cos(alpha0)), dir);
-  let lo = -1;
-  let hi = -1;
-  let cLo = 0;
-  let cHi = Number.POSITIVE_INFINITY;
-  for (let i = 0; i < k.n; i++) {
-    const di = dir.d[i] as number;
-    if (!(di > 0 && di < dir.depth)) continue;
-    const cj = di / k.beta1;
-    if (cj < c0 && cj > cLo) {
-      cLo = cj;
-      lo = i;
-    } else if (cj > c0 && cj < cHi) {
-      cHi = cj;
-      hi = i;
-    }
-  }
-  br.lo = lo;
-  br.hi = hi;
+  stepsAround(k, dir, c0);
+  br.lo = around.below;
+  br.hi = around.above;
   br.Pu = Pu;
   br.theta = theta;
   let a = alpha0;
   let fa = branchErr(a);
   if (Number.isNaN(fa)) return null;
-  let b = a - fa / k.alphaSlope;
+  let b = a - fa / st.alphaSlope;
   let fb = branchErr(b);
   for (let iter = 0; iter < 30; iter++) {
     if (Number.isNaN(fb)) return null;
@@ -359,6 +362,8 @@ const st = {
   k: null as Kernel | null, Pu: 0, theta: 0, guess: 0, degenerate: false, mScale: 0, lastAlpha: Number.NaN,
   /** the root c one step before (prevAlpha, prevC): extrapolating c in α halves the c error */
   prevAlpha: Number.NaN, prevC: 0,
+  /** last slopes dθ/dα of the angle iteration and dφPn/dc of solveSingle (this call only) */
+  alphaSlope: 1, slope: 0,
 };
 
 /** Angle between the nominal moment vector at neutral-axis angle α and the target θ. */
@@ -372,7 +377,7 @@ function errAt(alpha: number): number {
     const g = guess + ((alpha - st.lastAlpha) * (guess - st.prevC)) / (st.lastAlpha - st.prevAlpha);
     if (g > 0 && g < dir.cP0) guess = g;
   }
-  solveSingle(k, dir, st.Pu, guess, root);
+  solveSingle(k, dir, st.Pu, guess, root, st);
   st.prevAlpha = st.lastAlpha;
   st.prevC = st.guess;
   st.guess = root.c;

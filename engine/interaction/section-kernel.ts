@@ -99,10 +99,6 @@ export interface Kernel {
   uni: (Direction | undefined)[];
   scans: (Scan | undefined)[];
   halfPitch?: ResolvedSection;
-  /** last secant slope dφPn/dc seen by the warm-start solver (kip/in; reset per biaxial call) */
-  slope: number;
-  /** last slope dθ/dα seen by the biaxial angle iteration (reset per call) */
-  alphaSlope: number;
   /** Igx/Igy: tan α / tan θ of the elastic neutral axis, the first guess of every biaxial call */
   elasticTanRatio: number;
   /** reusable direction for arbitrary angles */
@@ -141,8 +137,8 @@ function isMirrored(bx: number[], by: number[], ba: number[], sx: number, sy: nu
   return true;
 }
 
-/** A packed array of n doubles (new Array(n) would make a holey one, slower to read). @internal */
-export function zeros(n: number): number[] {
+/** A packed array of n doubles (new Array(n) would make a holey one, slower to read). */
+function zeros(n: number): number[] {
   const a: number[] = [];
   for (let i = 0; i < n; i++) a.push(0.5);
   a.fill(0);
@@ -193,8 +189,6 @@ export function kernelOf(section: ResolvedSection): Kernel {
     symAboutY: isMirrored(bx, by, ba, -1, 1),
     uni: [undefined, undefined, undefined, undefined],
     scans: [undefined, undefined, undefined, undefined],
-    slope: 0,
-    alphaSlope: 1,
     elasticTanRatio: section.Igy > 0 ? section.Igx / section.Igy : 1,
     scratchDir: undefined as unknown as Direction,
   };
@@ -581,12 +575,14 @@ export function solveScan(k: Kernel, scan: Scan, Pu: number, px: number, py: num
 }
 
 /**
- * One root of φPn(c) = Pu on [0, cP0] by Brent from the whole bracket, optionally
+ * One root of φPn(c) = Pu on [0, cP0] by solveC on the whole bracket, optionally
  * starting from a guess (used inside the biaxial angle iteration, where speed matters
  * more than catching every root; the final angle is re-solved with a full scan).
+ * `warm.slope` carries the secant slope dφPn/dc from one call to the next of the same
+ * iteration (0: none yet); the caller owns it, so no state outlives the iteration.
  */
 export function solveSingle(
-  k: Kernel, dir: Direction, Pu: number, guess: number, res: RootResult, ftolRel = 1e-11,
+  k: Kernel, dir: Direction, Pu: number, guess: number, res: RootResult, warm: { slope: number }, ftolRel = 1e-11,
 ): RootResult {
   let lo = 0;
   let hi = dir.cP0;
@@ -599,7 +595,7 @@ export function solveSingle(
     // warm start: secant steps from the previous root, kept inside a shrinking bracket
     let c0 = guess;
     let f0 = phiPnAt(k, dir, c0) - Pu;
-    let slope = k.slope > 0 ? k.slope : (fhi - flo) / (hi - lo);
+    let slope = warm.slope > 0 ? warm.slope : (fhi - flo) / (hi - lo);
     for (let iter = 0; iter < 6; iter++) {
       if (f0 < 0) {
         lo = c0;
@@ -620,7 +616,7 @@ export function solveSingle(
       c0 = c1;
       f0 = f1;
     }
-    if (slope > 0) k.slope = slope;
+    if (slope > 0) warm.slope = slope;
     if (Number.isNaN(c) && Math.abs(f0) <= ftol) c = c0;
   }
   if (Number.isNaN(c)) c = solveC(k, dir, Pu, lo, flo, hi, fhi);
