@@ -598,7 +598,6 @@ export function buildCandidateTable(
   let maxCents = 0;
   const maxPu = problem.loads.reduce((m, l) => Math.max(m, l.Pu), -Infinity);
   let k = 0;
-  const braceAdd = problem.braceLevels.map((n) => n * problem.prices.brace);
   for (const fam of families) {
     const region = regionIndexOf(fam);
     const laps = problem.fcs.map((fc) => computeLapLength(fam.fy.v, fam.db, fc.v));
@@ -612,11 +611,10 @@ export function buildCandidateTable(
         // the engine fails a case with Pu > φPn,max first; a case's utilization is ≥ Pu/φPn,max
         const phiPnMax = phiPnMaxOf(fam, li, (problem.fcs[fi] as Valued).v);
         const lbUnits = maxPu <= phiPnMax ? toUtilUnits(maxPu / phiPnMax) : AXIAL_FAIL;
-        // computeCost adds the brace line last, so the total with n braces is total₀ + n·price
         const base = costOf(problem, q, fi, 0);
         for (let bi = 0; bi < problem.braceLevels.length; bi++) {
           const n = problem.braceLevels[bi] as number;
-          const cost = n > 0 ? base + (braceAdd[bi] as number) : base;
+          const cost = withBraces(problem, base, n);
           t.family[k] = fam.index;
           t.layout[k] = li;
           t.fc[k] = fi;
@@ -652,9 +650,15 @@ export function candidateCostOf(problem: SearchProblem, t: CandidateTable, i: nu
   const fi = t.fc[i] as number;
   const n = problem.braceLevels[t.brace[i] as number] as number;
   const q = quantitiesOf(problem, fam, li, fi);
-  const base = costOf(problem, q, fi, 0);
-  // computeCost adds the brace line last, so the total with n braces is total₀ + n·price
-  return { cost: n > 0 ? base + n * problem.prices.brace : base, carbon: carbonOf(problem, q, fi) };
+  return { cost: withBraces(problem, costOf(problem, q, fi, 0), n), carbon: carbonOf(problem, q, fi) };
+}
+
+/**
+ * The cost with n brace levels from the cost without any: computeCost adds the brace line
+ * last, so the total is total₀ + n·price, bit for bit (the table and candidateCostOf share it).
+ */
+function withBraces(problem: SearchProblem, base: number, n: number): number {
+  return n > 0 ? base + n * problem.prices.brace : base;
 }
 
 /** The contract id of candidate i. */

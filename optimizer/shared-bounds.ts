@@ -11,7 +11,6 @@ import type { BoundExchange } from "./sweep";
 const CTL = 8; // int32 slots: 0 cancel, 1 points written, 2 visited, 3 kept, 4 candidates announced, 5 parts announced
 const CAPACITY = 1 << 15;
 
-
 export interface SharedBounds {
   buffer: SharedArrayBuffer;
 }
@@ -40,7 +39,6 @@ export function readProgress(b: SharedBounds): { visited: number; kept: number; 
   return { visited: Atomics.load(ctl, 2), kept: Atomics.load(ctl, 3), candidates: Atomics.load(ctl, 4), parts: Atomics.load(ctl, 5) };
 }
 
-/** The exchange one worker (or the in-process search) uses. */
 /** The exchange one worker (or the in-process search) uses. */
 export function sharedExchange(
   b: SharedBounds,
