@@ -2,9 +2,12 @@ import { describe, expect, it } from "vitest";
 import {
   checkResolved,
   computeCm,
+  computeCriticalLoad,
   computeEndMomentRatio,
   computeMinimumMoment,
+  computeMomentMagnifier,
   computeSlendernessLimit,
+  computeSwayMagnifier,
   resolveSection,
 } from "@/engine";
 
@@ -56,5 +59,48 @@ describe("Wight & MacGregor 6th ed., Example 12-2, column C–D (published value
     expect(c.m2min).toBeNull();
     expect(c.x.M2).toBeCloseTo(M2, 9);
     expect(c.x.Cm).toBeCloseTo(0.6 + 0.4 * (-38.0 / 94.4), 12);
+  });
+});
+
+/*
+ * Published worked example with the magnifier chain from a given stiffness: J. C. McCormac and
+ * R. H. Brown, "Design of Reinforced Concrete", Chapter 11 "Slender Columns" (an ACI 318-08-era
+ * edition; the reproduction we read names neither the edition nor the example number), a 12-in
+ * column of a sway frame whose nonsway magnifier δns is computed first with k = 1.0
+ * ("assuming conservatively"), then δs with k = 1.95. Values quoted from the published text:
+ *   EI = 1.35 × 10⁶ k-in², ℓu = 11.25 ft; k = 1.0: Pc = 731 k
+ *   Cm = 0.6 + 0.4(0/173.5) = 0.6 (the book's ACI 318-08 form; M1 = 0)
+ *   δns = 0.6 / (1 − 66/((0.75)(731))) = 0.68 < 1.0, use 1.0
+ *   k = 1.95: Pc = 192.3 k; δs = 1/(1 − (2)(66)/((0.75)(2 × 192.3))) = 1.84
+ *   next load case: e_min = 0.6 + 0.03 × 12 = 0.96 in; M2,min = (48)(0.96) = 46.08 in-k = 3.84 ft-k
+ * (The book then prints Mc = (1.0)(173.5) + (1.84)(0) = 173.9 ft-k; the arithmetic gives 173.5.)
+ */
+describe("McCormac & Brown, Chapter 11, 12-in sway-frame column (published values)", () => {
+  const EI = 1.35e6; // k-in²
+  const lu = 11.25 * 12; // in
+  const Pu = 66; // kip
+
+  it("Pc = π²EI/(kℓu)²: 731 k with k = 1.0 and 192.3 k with k = 1.95 (6.6.4.4.2)", () => {
+    expect(computeCriticalLoad(EI, 1.0, lu)).toBeCloseTo(731, 0);
+    expect(computeCriticalLoad(EI, 1.95, lu)).toBeCloseTo(192.3, 1);
+  });
+
+  it("Cm = 0.6 with M1 = 0, and δns = 0.68 < 1.0 so δns = 1.0 (6.6.4.5.2)", () => {
+    const Cm = computeCm(computeEndMomentRatio(0, 173.5 * 12, "single"), false);
+    expect(Cm).toBeCloseTo(0.6, 12);
+    const raw = Cm / (1 - Pu / (0.75 * 731)); // the book's 0.68 before the ≥ 1.0 floor
+    expect(raw).toBeCloseTo(0.68, 2);
+    expect(computeMomentMagnifier(Cm, Pu, computeCriticalLoad(EI, 1.0, lu))).toBe(1);
+  });
+
+  it("δs = 1/(1 − ΣPu/(0.75 ΣPc)) = 1.84 for two columns of 66 k and 192.3 k (6.6.4.6.2(b))", () => {
+    const s = computeSwayMagnifier({ sumPu: 2 * Pu, sumPc: 2 * computeCriticalLoad(EI, 1.95, lu) });
+    expect(s.deltaS).toBeCloseTo(1.84, 2);
+    expect(computeSwayMagnifier({ sumPu: 2 * Pu, sumPc: 2 * 192.3 }).deltaS).toBeCloseTo(1.84, 2);
+  });
+
+  it("M2,min = Pu(0.6 + 0.03h) = 46.08 in-k for Pu = 48 k and h = 12 in (6.6.4.5.4)", () => {
+    expect(computeMinimumMoment(48, 12)).toBeCloseTo(46.08, 10);
+    expect(computeMinimumMoment(48, 12) / 12).toBeCloseTo(3.84, 10);
   });
 });
