@@ -88,9 +88,10 @@ describe("McCormac & Brown, Chapter 11, 12-in sway-frame column (published value
   it("Cm = 0.6 with M1 = 0, and δns = 0.68 < 1.0 so δns = 1.0 (6.6.4.5.2)", () => {
     const Cm = computeCm(computeEndMomentRatio(0, 173.5 * 12, "single"), false);
     expect(Cm).toBeCloseTo(0.6, 12);
-    const raw = Cm / (1 - Pu / (0.75 * 731)); // the book's 0.68 before the ≥ 1.0 floor
-    expect(raw).toBeCloseTo(0.68, 2);
-    expect(computeMomentMagnifier(Cm, Pu, computeCriticalLoad(EI, 1.0, lu))).toBe(1);
+    const Pc = computeCriticalLoad(EI, 1.0, lu);
+    // the book's 0.68 before the ≥ 1.0 floor: Cm times the engine's 1/(1 − Pu/0.75Pc) (≥ 1, so not floored)
+    expect(Cm * (computeMomentMagnifier(1, Pu, Pc) as number)).toBeCloseTo(0.68, 2);
+    expect(computeMomentMagnifier(Cm, Pu, Pc)).toBe(1);
   });
 
   it("δs = 1/(1 − ΣPu/(0.75 ΣPc)) = 1.84 for two columns of 66 k and 192.3 k (6.6.4.6.2(b))", () => {
